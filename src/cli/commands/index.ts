@@ -1,0 +1,7 @@
+import type { Command } from 'commander';
+import { registerDemo } from './demo.js';
+
+/** Each command module exports a function that adds itself to the program. */
+export type RegisterCommand = (program: Command) => void;
+
+export const commands: RegisterCommand[] = [registerDemo];

@@ -1,0 +1,3 @@
+export * from './input-error.js';
+export type * from './linear-spectrum.js';
+export type * from './statistic-model.js';
