@@ -1,1 +1,2 @@
-export {};
+export * from './triangle-bins.js';
+export type * from './triangle-integrand.js';

@@ -1,1 +1,2 @@
-export {};
+export * from './kernels.js';
+export * from './ir-resummed-power.js';
