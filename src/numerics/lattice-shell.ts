@@ -20,9 +20,11 @@ export function fundamentalFrequency(boxSize: number): number {
 /** All lattice vectors with kLo <= k_f |n| < kHi. */
 export function latticeShell(boxSize: number, kLo: number, kHi: number): LatticeShell {
   const kf = fundamentalFrequency(boxSize);
-  // Compare squared integer norms against squared bounds in units of k_f.
-  const lo2 = (kLo / kf) ** 2;
-  const hi2 = (kHi / kf) ** 2;
+  // Compare integer |n|^2 with the squared bounds in units of k_f. The bounds are
+  // nudged down by a relative 1e-9 so that a vector whose k equals an edge up to
+  // rounding always goes to the shell above, as the half-open rule says.
+  const lo2 = (kLo / kf) ** 2 * (1 - 1e-9);
+  const hi2 = (kHi / kf) ** 2 * (1 - 1e-9);
   const nMax = Math.ceil(kHi / kf);
   const out: number[] = [];
   const norms: number[] = [];
