@@ -1,0 +1,110 @@
+import { InputError } from '../../contracts/input-error.js';
+
+/**
+ * Fisher information of a Gaussian likelihood with a parameter-independent
+ * covariance: F_ab = (d m / d theta_a)^T C^{-1} (d m / d theta_b)
+ * (Tegmark, Taylor & Heavens 1997, ApJ 480, 22, eq. 15 without the covariance
+ * derivative term).
+ *
+ * Derivatives are central differences at two steps h and h/2; the reported
+ * derivative is their Richardson combination (4 D(h/2) - D(h)) / 3, and a
+ * parameter whose two estimates differ by more than `stabilityTolerance`
+ * (in the C^{-1} norm) is named in `warnings`.
+ */
+export type ModelVectorFunction = (params: Readonly<Record<string, number>>) => Float64Array;
+
+/** Applies C^{-1} to a vector: out = C^{-1} v. */
+export type PrecisionOperator = (v: Float64Array) => Float64Array;
+
+export interface FisherSetup {
+  readonly names: readonly string[];
+  readonly fiducial: Readonly<Record<string, number>>;
+  readonly model: ModelVectorFunction;
+  readonly precision: PrecisionOperator;
+  /** Absolute step per parameter; default 1% of |fiducial|, or 0.01 at zero. */
+  readonly steps?: Readonly<Record<string, number>>;
+  /** Relative disagreement of the two step sizes that triggers a warning (default 0.01). */
+  readonly stabilityTolerance?: number;
+  /**
+   * Exact derivatives for parameters the model is linear in (for example the
+   * columns of StatisticModel.linearPart); they skip finite differences.
+   */
+  readonly exactDerivatives?: Readonly<Record<string, Float64Array>>;
+}
+
+export interface FisherMatrix {
+  readonly names: readonly string[];
+  /** Row-major n x n. */
+  readonly matrix: Float64Array;
+  readonly warnings: readonly string[];
+}
+
+function defaultStep(value: number): number {
+  return value === 0 ? 0.01 : 0.01 * Math.abs(value);
+}
+
+function centralDifference(setup: FisherSetup, name: string, h: number): Float64Array {
+  const up = { ...setup.fiducial, [name]: setup.fiducial[name] + h };
+  const down = { ...setup.fiducial, [name]: setup.fiducial[name] - h };
+  const mUp = setup.model(up);
+  const mDown = setup.model(down);
+  const d = new Float64Array(mUp.length);
+  for (let i = 0; i < d.length; i++) d[i] = (mUp[i] - mDown[i]) / (2 * h);
+  return d;
+}
+
+function dot(a: Float64Array, b: Float64Array): number {
+  let s = 0;
+  for (let i = 0; i < a.length; i++) s += a[i] * b[i];
+  return s;
+}
+
+export function fisherMatrix(setup: FisherSetup): FisherMatrix {
+  const { names } = setup;
+  if (names.length === 0) throw new InputError('Fisher matrix: no parameters were given');
+  const tolerance = setup.stabilityTolerance ?? 0.01;
+  const warnings: string[] = [];
+  const derivatives: Float64Array[] = [];
+  const weighted: Float64Array[] = [];
+  for (const name of names) {
+    const value = setup.fiducial[name];
+    if (value === undefined || !Number.isFinite(value)) {
+      throw new InputError(`Fisher matrix: parameter "${name}" has no finite fiducial value`);
+    }
+    const exact = setup.exactDerivatives?.[name];
+    let d: Float64Array;
+    if (exact) {
+      d = exact;
+    } else {
+      const h = setup.steps?.[name] ?? defaultStep(value);
+      if (!(h > 0)) throw new InputError(`Fisher matrix: step for "${name}" must be positive, got ${h}`);
+      const coarse = centralDifference(setup, name, h);
+      const fine = centralDifference(setup, name, h / 2);
+      d = new Float64Array(fine.length);
+      const diff = new Float64Array(fine.length);
+      for (let i = 0; i < d.length; i++) {
+        d[i] = (4 * fine[i] - coarse[i]) / 3;
+        diff[i] = fine[i] - coarse[i];
+      }
+      const normFine = Math.sqrt(Math.max(dot(fine, setup.precision(fine)), 0));
+      const normDiff = Math.sqrt(Math.max(dot(diff, setup.precision(diff)), 0));
+      if (normFine > 0 && normDiff / normFine > tolerance) {
+        warnings.push(
+          `derivative with respect to "${name}" changes by ${(100 * normDiff / normFine).toFixed(2)}% between steps ${h} and ${h / 2}: choose another step`,
+        );
+      }
+    }
+    derivatives.push(d);
+    weighted.push(setup.precision(d));
+  }
+  const n = names.length;
+  const matrix = new Float64Array(n * n);
+  for (let a = 0; a < n; a++) {
+    for (let b = a; b < n; b++) {
+      const v = dot(derivatives[a], weighted[b]);
+      matrix[a * n + b] = v;
+      matrix[b * n + a] = v;
+    }
+  }
+  return { names: [...names], matrix, warnings };
+}

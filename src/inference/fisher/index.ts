@@ -1,0 +1,2 @@
+export * from './fisher-matrix.js';
+export * from './fisher-algebra.js';
