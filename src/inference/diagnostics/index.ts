@@ -7,3 +7,4 @@ export * from './rank-normalize.js';
 export * from './rhat.js';
 export * from './split-chains.js';
 export * from './chain-moments.js';
+export * from './pool-draws.js';

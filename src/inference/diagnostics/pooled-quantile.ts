@@ -1,14 +1,9 @@
+import { poolDraws } from './pool-draws.js';
+
 /** Quantile p of all draws pooled, interpolating linearly between order statistics (numpy's default rule). */
 export function pooledQuantile(chains: readonly Float64Array[], p: number): number {
-  let total = 0;
-  for (const c of chains) total += c.length;
-  const all = new Float64Array(total);
-  let o = 0;
-  for (const c of chains) {
-    all.set(c, o);
-    o += c.length;
-  }
-  all.sort();
+  const all = poolDraws(chains).sort();
+  const total = all.length;
   const h = (total - 1) * p;
   const lo = Math.floor(h);
   const hi = Math.min(lo + 1, total - 1);

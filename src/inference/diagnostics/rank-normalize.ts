@@ -1,4 +1,5 @@
 import { normalQuantile } from './normal-quantile.js';
+import { poolDraws } from './pool-draws.js';
 
 /**
  * Rank normalisation (Vehtari et al. 2021, eq. 14): pool all draws, replace
@@ -7,14 +8,8 @@ import { normalQuantile } from './normal-quantile.js';
  * Returns chains of the same shapes.
  */
 export function rankNormalize(chains: readonly Float64Array[]): Float64Array[] {
-  let total = 0;
-  for (const c of chains) total += c.length;
-  const values = new Float64Array(total);
-  let o = 0;
-  for (const c of chains) {
-    values.set(c, o);
-    o += c.length;
-  }
+  const values = poolDraws(chains);
+  const total = values.length;
   const order = new Uint32Array(total);
   for (let i = 0; i < total; i++) order[i] = i;
   order.sort((a, b) => values[a] - values[b]);
@@ -28,7 +23,7 @@ export function rankNormalize(chains: readonly Float64Array[]): Float64Array[] {
     i = j;
   }
   const out: Float64Array[] = [];
-  o = 0;
+  let o = 0;
   for (const c of chains) {
     out.push(z.slice(o, o + c.length));
     o += c.length;
