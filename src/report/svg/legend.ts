@@ -1,0 +1,47 @@
+import { svgMarker, type MarkerKind } from './markers.js';
+import { INK } from './palette.js';
+import { richTextWidthEm } from './rich-text.js';
+import { FONT_SIZE } from './svg-document.js';
+import { svgLine, svgRect, svgText } from './svg-elements.js';
+
+export interface LegendEntry {
+  label: string;
+  colour: string;
+  /** How the sample swatch is drawn. */
+  swatch: 'line' | 'dashed' | 'marker' | 'band';
+  marker?: MarkerKind;
+}
+
+const ROW = 16;
+const SWATCH = 20;
+
+/** A legend box whose top-right corner sits at (right, top). */
+export function renderLegend(entries: readonly LegendEntry[], right: number, top: number): string {
+  if (entries.length === 0) return '';
+  const textWidth = Math.max(...entries.map((e) => richTextWidthEm(e.label))) * FONT_SIZE;
+  const width = SWATCH + 14 + textWidth;
+  const left = right - width;
+  let out = svgRect(left, top, width, entries.length * ROW + 6, {
+    fill: '#ffffff',
+    'fill-opacity': 0.85,
+    stroke: '#bbbbbb',
+    'stroke-width': 0.8,
+  });
+  entries.forEach((entry, i) => {
+    const cy = top + 3 + ROW * i + ROW / 2;
+    const x0 = left + 5;
+    if (entry.swatch === 'marker') {
+      out += svgMarker(entry.marker ?? 'circle', x0 + SWATCH / 2, cy, 3.5, entry.colour);
+    } else if (entry.swatch === 'band') {
+      out += svgRect(x0, cy - 5, SWATCH, 10, { fill: entry.colour, 'fill-opacity': 0.35, stroke: entry.colour, 'stroke-width': 1 });
+    } else {
+      out += svgLine(x0, cy, x0 + SWATCH, cy, {
+        stroke: entry.colour,
+        'stroke-width': 1.8,
+        'stroke-dasharray': entry.swatch === 'dashed' ? '5 3' : undefined,
+      });
+    }
+    out += svgText(x0 + SWATCH + 5, cy + 4, entry.label, { fill: INK });
+  });
+  return out;
+}
