@@ -1,1 +1,9 @@
-export {};
+export * from './k-bins.js';
+export * from './lattice-bin-modes.js';
+export * from './bin-sampling.js';
+export * from './alcock-paczynski.js';
+export * from './power-parameters.js';
+export * from './power-model-setup.js';
+export * from './redshift-power-direct.js';
+export * from './power-templates.js';
+export * from './power-multipole-model.js';
