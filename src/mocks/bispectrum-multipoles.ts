@@ -1,0 +1,93 @@
+import { InputError } from '../contracts/input-error.js';
+import type { TriangleBins } from '../bispectrum/triangle-bins.js';
+import { RealFourier3d } from '../numerics/fft-3d.js';
+import { checkMesh, meshVolume, type Mesh } from './mesh.js';
+import { shellFilteredField, type ShellWeighting } from './shell-filtered-field.js';
+import { shellModesOf, type ShellModes } from './shell-modes.js';
+import { accumulateTriangleSums, triangleSumPasses } from './triangle-sums.js';
+
+/** Measured bispectrum multipoles, one entry per triangle bin (order of `bins`). */
+export interface MeasuredBispectrum {
+  readonly bins: TriangleBins;
+  /** Closed triangles k1 + k2 + k3 = 0 with k1, k2, k3 in shells i, j, l (ordered triples). */
+  readonly counts: Float64Array;
+  /** B_0 and B_2 (Legendre weight on k1, the side from shell i) in (Mpc/h)^6; NaN where counts = 0. */
+  readonly b0: Float64Array;
+  readonly b2: Float64Array;
+}
+
+interface Prepared {
+  readonly fourier: RealFourier3d;
+  readonly modes: ShellModes[];
+  readonly passes: boolean[];
+  readonly work: { spectrum: Float64Array; scratch: Float64Array };
+}
+
+function prepare(mesh: Mesh, bins: TriangleBins): Prepared {
+  checkMesh(mesh);
+  const fourier = new RealFourier3d(mesh.n);
+  return {
+    fourier,
+    modes: shellModesOf(mesh, bins.shells),
+    passes: triangleSumPasses(mesh, bins),
+    work: { spectrum: fourier.createSpectrum(), scratch: fourier.createSpectrum() },
+  };
+}
+
+function shellFields(p: Prepared, source: Float64Array | null, weighting: ShellWeighting, shifted: boolean): Float64Array[] {
+  return p.modes.map((m) => shellFilteredField(p.fourier, m, source, weighting, shifted, p.work));
+}
+
+/**
+ * Number of closed triangles per bin from FFTs of the shell indicators:
+ * N_123 = n^6 sum_x I_i(x) I_j(x) I_l(x) (docs/conventions.md, "Mocks").
+ */
+export function countTrianglesByFft(mesh: Mesh, bins: TriangleBins): Float64Array {
+  const p = prepare(mesh, bins);
+  const sums = new Float64Array(bins.size);
+  for (const shifted of p.passes) {
+    const indicator = shellFields(p, null, 'unit', shifted);
+    accumulateTriangleSums(bins, [indicator], indicator, [sums]);
+  }
+  const scale = mesh.n ** 6 / p.passes.length;
+  return sums.map((v) => Math.round(v * scale));
+}
+
+/**
+ * FFT bispectrum estimator with shell-filtered fields (Scoccimarro's method,
+ * PRD 70 (2004) 083007 and Phys. Rev. D 92 (2015) 083532, from memory):
+ *   B_L(bin) = (2L + 1) (V^2 / n^3) sum_x D^(L)_i(x) D_j(x) D_l(x) / N_123,
+ * with D the shell-filtered fields of the discrete transform F of the field
+ * and D^(2) carrying L_2(mu) on the first side. `counts` (from
+ * countTrianglesByFft for the same mesh and bins) skips the counting FFTs.
+ */
+export function measureBispectrumMultipoles(
+  spectrum: Float64Array,
+  mesh: Mesh,
+  bins: TriangleBins,
+  options: { counts?: Float64Array } = {},
+): MeasuredBispectrum {
+  const counts = options.counts ?? countTrianglesByFft(mesh, bins);
+  if (counts.length !== bins.size) {
+    throw new InputError(`bispectrum: ${counts.length} triangle counts given for ${bins.size} triangle bins`);
+  }
+  const p = prepare(mesh, bins);
+  if (spectrum.length !== p.fourier.spectrumLength) {
+    throw new InputError(`bispectrum: the spectrum has ${spectrum.length} values, a ${mesh.n}^3 mesh needs ${p.fourier.spectrumLength}`);
+  }
+  const s0 = new Float64Array(bins.size);
+  const s2 = new Float64Array(bins.size);
+  for (const shifted of p.passes) {
+    const plain = shellFields(p, spectrum, 'unit', shifted);
+    const weighted = shellFields(p, spectrum, 'legendre2', shifted);
+    accumulateTriangleSums(bins, [plain, weighted], plain, [s0, s2]);
+  }
+  const scale = meshVolume(mesh) ** 2 / mesh.n ** 3 / p.passes.length;
+  const b0 = new Float64Array(bins.size);
+  const b2 = new Float64Array(bins.size);
+  for (let b = 0; b < bins.size; b++) {
+    b0[b] = counts[b] > 0 ? (scale * s0[b]) / counts[b] : Number.NaN;
+    b2[b] = counts[b] > 0 ? (5 * scale * s2[b]) / counts[b] : Number.NaN;
+  }
+  return { bins, counts, b0, b2 };
+}
