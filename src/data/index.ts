@@ -1,1 +1,15 @@
-export {};
+export * from './csv-table.js';
+export * from './bundle-metadata.js';
+export * from './statistic-table.js';
+export * from './data-vector.js';
+export * from './measurement-bundle.js';
+export * from './scale-cuts.js';
+export * from './covariance/cholesky-factor.js';
+export * from './covariance/check-covariance.js';
+export * from './covariance/sample-covariance.js';
+export * from './covariance/matrix-file.js';
+export * from './covariance/mode-counts.js';
+export * from './covariance/gaussian-power-covariance.js';
+export * from './covariance/gaussian-bispectrum-variance.js';
+export * from './covariance/power-bispectrum-cross.js';
+export * from './covariance/covariance-choice.js';
