@@ -1,1 +1,1 @@
-export {};
+export * from './scale-cuts/theory-error-covariance.js';
