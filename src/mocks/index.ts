@@ -4,3 +4,8 @@ export * from './shell-filtered-field.js';
 export * from './triangle-sums.js';
 export * from './power-multipoles.js';
 export * from './bispectrum-multipoles.js';
+export * from './mode-loop.js';
+export * from './gaussian-field.js';
+export * from './linear-galaxy-field.js';
+export * from './second-order-field.js';
+export * from './stochastic-field.js';
