@@ -43,6 +43,6 @@ describe('Alcock–Paczynski distortion', () => {
     const c = scipyMultipoles.cases['full-ap'];
     const model = new PowerMultipoleModel({ spectrum, bins: { kMin: 0.01, dk: 0.01, count: 40 }, nbar: c.params.nbar });
     const out = model.evaluate(c.params);
-    expect(worstDeviationFromFixture(out, c)).toBeLessThan(1e-9);
+    expect(worstDeviationFromFixture(out, c)).toBeLessThan(1e-12);
   });
 });
