@@ -1,0 +1,97 @@
+import type { Background } from './background.js';
+
+/**
+ * Scale-independent linear growth of the matter field from the growth ODE in
+ * x = ln a (e.g. Dodelson & Schmidt, Modern Cosmology 2nd ed., eq. 8.77 rewritten in ln a):
+ *   D'' + (2 + dlnE/dlna) D' - (3/2) Omega_m(a) D = 0.
+ * The growing mode starts at a = 1e-5 from the exact matter + radiation
+ * solution D = a + (2/3) a_eq (Meszaros 1974), so D / a -> 1 deep in matter
+ * domination and D = a exactly in Einstein–de Sitter. Fixed-step classical RK4;
+ * D and D' are interpolated between steps by cubic Hermite polynomials.
+ */
+export class GrowthHistory {
+  readonly lnA0: number;
+  readonly step: number;
+  /** D and dD/dln a at the nodes x_i = lnA0 + i step, up to a = 1. */
+  readonly d: Float64Array;
+  readonly dPrime: Float64Array;
+  readonly dSecond: Float64Array;
+  private readonly background: Background;
+
+  constructor(background: Background, options: { aStart?: number; steps?: number } = {}) {
+    this.background = background;
+    const aStart = options.aStart ?? 1e-5;
+    const steps = options.steps ?? 384;
+    this.lnA0 = Math.log(aStart);
+    this.step = -this.lnA0 / steps;
+    const n = steps + 1;
+    this.d = new Float64Array(n);
+    this.dPrime = new Float64Array(n);
+    this.dSecond = new Float64Array(n);
+    const aEq = background.omegaRadiation0 / background.omegaMatter0;
+    let y = aStart + (2 / 3) * aEq;
+    let v = aStart;
+    const h = this.step;
+    for (let i = 0; i < n; i++) {
+      const x = this.lnA0 + i * h;
+      this.d[i] = y;
+      this.dPrime[i] = v;
+      this.dSecond[i] = this.accel(x, y, v);
+      if (i === n - 1) break;
+      // RK4 for the system (y, v)' = (v, accel(x, y, v)).
+      const k1y = v;
+      const k1v = this.dSecond[i];
+      const k2y = v + 0.5 * h * k1v;
+      const k2v = this.accel(x + 0.5 * h, y + 0.5 * h * k1y, k2y);
+      const k3y = v + 0.5 * h * k2v;
+      const k3v = this.accel(x + 0.5 * h, y + 0.5 * h * k2y, k3y);
+      const k4y = v + h * k3v;
+      const k4v = this.accel(x + h, y + h * k3y, k4y);
+      y += (h / 6) * (k1y + 2 * k2y + 2 * k3y + k4y);
+      v += (h / 6) * (k1v + 2 * k2v + 2 * k3v + k4v);
+    }
+  }
+
+  private accel(x: number, y: number, v: number): number {
+    const a = Math.exp(x);
+    const bg = this.background;
+    const omegaM = bg.omegaMatter0 / (a * a * a * bg.e2(a));
+    return -(2 + bg.dlnEdlna(a)) * v + 1.5 * omegaM * y;
+  }
+
+  /** Cubic Hermite interpolation of (value, slope) node arrays at x = ln a. */
+  private hermite(values: Float64Array, slopes: Float64Array, x: number): number {
+    const last = values.length - 1;
+    let t = (x - this.lnA0) / this.step;
+    let i = Math.floor(t);
+    if (i < 0) i = 0;
+    else if (i > last - 1) i = last - 1;
+    t -= i;
+    const t2 = t * t;
+    const t3 = t2 * t;
+    return (
+      (2 * t3 - 3 * t2 + 1) * values[i] +
+      (t3 - 2 * t2 + t) * this.step * slopes[i] +
+      (-2 * t3 + 3 * t2) * values[i + 1] +
+      (t3 - t2) * this.step * slopes[i + 1]
+    );
+  }
+
+  private checkRedshift(z: number): number {
+    if (!(z >= 0) || !(Math.log(1 / (1 + z)) >= this.lnA0)) {
+      throw new RangeError(`growth is tabulated for 0 <= z <= ${Math.exp(-this.lnA0) - 1}, got z = ${z}`);
+    }
+    return -Math.log1p(z);
+  }
+
+  /** Growth factor D(z), normalised so that D / a -> 1 deep in matter domination. */
+  factor(z: number): number {
+    return this.hermite(this.d, this.dPrime, this.checkRedshift(z));
+  }
+
+  /** Growth rate f(z) = dln D / dln a. */
+  rate(z: number): number {
+    const x = this.checkRedshift(z);
+    return this.hermite(this.dPrime, this.dSecond, x) / this.hermite(this.d, this.dPrime, x);
+  }
+}
