@@ -7,3 +7,4 @@ export * from './power-model-setup.js';
 export * from './redshift-power-direct.js';
 export * from './power-templates.js';
 export * from './power-multipole-model.js';
+export * from './multipole-table.js';
