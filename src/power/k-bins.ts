@@ -38,3 +38,13 @@ export function powerBinEdges(bins: PowerKBins, i: number): [number, number] {
 export function continuumMeanK(lo: number, hi: number): number {
   return (0.75 * (hi ** 4 - lo ** 4)) / (hi ** 3 - lo ** 3);
 }
+
+/**
+ * Wavevectors of a continuous shell [lo, hi) in a box of side L, counted like
+ * latticeBinModes (n and -n both): (4 pi / 3)(hi^3 - lo^3) / k_f^3 with
+ * k_f = 2 pi / L (common practice).
+ */
+export function continuumModeCount(boxSize: number, lo: number, hi: number): number {
+  const kf = (2 * Math.PI) / boxSize;
+  return ((4 * Math.PI) / 3) * (hi ** 3 - lo ** 3) / kf ** 3;
+}

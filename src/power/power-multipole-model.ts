@@ -79,12 +79,12 @@ export class PowerMultipoleModel implements StatisticModel {
     const columns: Float64Array[] = [];
     const seen = new Set<string>();
     for (const name of linear) {
-      const t = (POWER_TEMPLATE_TERMS as readonly string[]).indexOf(name);
-      if (!POWER_LINEAR_NAMES.includes(name) || t < 0) {
+      if (!POWER_LINEAR_NAMES.includes(name)) {
         throw new InputError(`linear parameter ${name} is not one the power model is linear in (${POWER_LINEAR_NAMES.join(', ')})`);
       }
       if (seen.has(name)) throw new InputError(`linear parameter ${name} is listed twice`);
       seen.add(name);
+      const t = (POWER_TEMPLATE_TERMS as readonly string[]).indexOf(name);
       coefficients[t] = 0;
       columns.push(Float64Array.from(templates.columns[t]));
     }

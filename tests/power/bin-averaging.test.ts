@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { continuumMeanK, latticeBinModes, PowerMultipoleModel } from '../../src/power/index.js';
+import { continuumMeanK, continuumModeCount, latticeBinModes, PowerMultipoleModel } from '../../src/power/index.js';
 import { latticeShell } from '../../src/numerics/lattice-shell.js';
 import { analyticSpectrum } from './support/analytic-spectrum.js';
 
@@ -25,6 +25,12 @@ describe('k-bin averaging', () => {
       expect(b.modeCount).toBe(i === 0 ? shell.count - 1 : shell.count);
       expect(b.multiplicity.reduce((s, m) => s + m, 0)).toBe(b.modeCount);
     });
+  });
+
+  it('continuum mode count 4 pi (b^3 - a^3) / (3 k_f^3) matches the lattice for thick shells (common practice)', () => {
+    const modes = latticeBinModes(3000, { kMin: 0.1, dk: 0.01, count: 1 });
+    expect(Math.abs(modes[0].modeCount / continuumModeCount(3000, 0.095, 0.105) - 1)).toBeLessThan(0.01);
+    expect(continuumModeCount(2 * Math.PI, 0, 1)).toBeCloseTo((4 * Math.PI) / 3, 14);
   });
 
   it('mode-weighted mean k of a continuous shell: (3/4)(b^4 - a^4)/(b^3 - a^3) (common practice)', () => {
