@@ -17,3 +17,4 @@ export * from './continuous-bin-nodes.js';
 export * from './orientation-average.js';
 export * from './bin-averaging.js';
 export * from './lattice/index.js';
+export * from './lattice/index.js';
