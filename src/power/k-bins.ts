@@ -1,4 +1,5 @@
 import { InputError } from '../contracts/input-error.js';
+import { fundamentalFrequency } from '../numerics/lattice-shell.js';
 
 /**
  * Power-spectrum k bins of docs/conventions.md: centres kMin, kMin + dk, ...,
@@ -45,6 +46,6 @@ export function continuumMeanK(lo: number, hi: number): number {
  * k_f = 2 pi / L (common practice).
  */
 export function continuumModeCount(boxSize: number, lo: number, hi: number): number {
-  const kf = (2 * Math.PI) / boxSize;
+  const kf = fundamentalFrequency(boxSize);
   return ((4 * Math.PI) / 3) * (hi ** 3 - lo ** 3) / kf ** 3;
 }
