@@ -6,10 +6,10 @@ import type { AxisKind } from './axis-scale.js';
  * `padding` (a fraction of the span; in log space for log axes). A single
  * value gets a range around it.
  */
-export function axisDomain(values: Iterable<number>, kind: AxisKind, padding = 0.05): [number, number] {
+export function axisDomain(values: Iterable<number> | ArrayLike<number>, kind: AxisKind, padding = 0.05): [number, number] {
   let lo = Infinity;
   let hi = -Infinity;
-  for (const raw of values) {
+  for (const raw of Array.from(values)) {
     if (!Number.isFinite(raw)) continue;
     if (kind === 'log' && raw <= 0) throw new InputError(`log axis needs positive values, got ${raw}`);
     const v = kind === 'log' ? Math.log10(raw) : raw;

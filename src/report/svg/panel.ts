@@ -27,7 +27,7 @@ export interface PanelAxes {
 }
 
 export function makePanel(box: PanelBox, axes: PanelAxes): Panel {
-  const small = (pixels: number): number => Math.max(2, Math.min(6, Math.round(pixels / 60)));
+  const small = (pixels: number): number => Math.max(3, Math.min(6, Math.round(pixels / 60)));
   return {
     ...box,
     x: axisScale(axes.xKind ?? 'linear', axes.xDomain, [box.left, box.left + box.width], axes.xTicks ?? small(box.width)),

@@ -11,7 +11,7 @@ export function linearTickLabel(value: number, step: number): string {
 }
 
 export function logTickLabel(value: number): string {
-  const exponent = Math.round(Math.log10(value));
+  const exponent = Math.floor(Math.log10(value) + 1e-9);
   const mantissa = value / 10 ** exponent;
   if (Math.abs(mantissa - 1) < 1e-9) {
     if (exponent >= -2 && exponent <= 3) return minusSign(String(Number(value.toPrecision(6))));
