@@ -1,7 +1,8 @@
 import type { Command } from 'commander';
 import { registerDemo } from './demo.js';
+import { registerPowerMultipoles } from './power-multipoles.js';
 
 /** Each command module exports a function that adds itself to the program. */
 export type RegisterCommand = (program: Command) => void;
 
-export const commands: RegisterCommand[] = [registerDemo];
+export const commands: RegisterCommand[] = [registerDemo, registerPowerMultipoles];
