@@ -50,7 +50,7 @@ export function choleskyFactor(m: Float64Array, n: number, label = 'covariance')
 }
 
 /** Solve L y = b (forward substitution) into `out`. */
-export function solveLower(f: CholeskyFactor, b: Float64Array, out = new Float64Array(f.size)): Float64Array {
+export function solveLower(f: CholeskyFactor, b: Float64Array, out: Float64Array = new Float64Array(f.size)): Float64Array {
   const n = f.size;
   const L = f.lower;
   for (let i = 0; i < n; i++) {
@@ -63,7 +63,7 @@ export function solveLower(f: CholeskyFactor, b: Float64Array, out = new Float64
 }
 
 /** Solve L^T x = y (back substitution) into `out`. */
-export function solveUpper(f: CholeskyFactor, y: Float64Array, out = new Float64Array(f.size)): Float64Array {
+export function solveUpper(f: CholeskyFactor, y: Float64Array, out: Float64Array = new Float64Array(f.size)): Float64Array {
   const n = f.size;
   const L = f.lower;
   for (let i = n - 1; i >= 0; i--) {

@@ -1,0 +1,3 @@
+export * from './priors.js';
+export * from './safe-expression.js';
+export * from './parameter-space.js';
