@@ -68,27 +68,32 @@ export function eisensteinHu98(h: number, omegaM: number, omegaB: number, tCmb: 
   };
 }
 
-/** Eqs. 19–20: T0(k; alpha, beta) with q = k / (13.41 k_eq). */
-function pressurelessTransfer(q: number, alpha: number, beta: number): number {
+/** Eqs. 19–20: T0(k; alpha, beta) = L / (L + C q^2), given q^2 and the alpha-free part 386 / (1 + 69.9 q^1.08) of C. */
+function pressurelessTransfer(q: number, q2: number, cTail: number, alpha: number, beta: number): number {
   const l = Math.log(Math.E + 1.8 * beta * q);
-  const c = 14.2 / alpha + 386 / (1 + 69.9 * q ** 1.08);
-  return l / (l + c * q * q);
+  return l / (l + (14.2 / alpha + cTail) * q2);
 }
 
 /** Full transfer function with baryon acoustic oscillations, eqs. 16–24; k in h/Mpc. */
 export function transferEH98(p: EisensteinHu98, kH: number): number {
   const k = kH * p.h;
-  const q = k / (13.41 * p.kEq);
+  const q = k / (13.41 * p.kEq); // eq. 10
+  const q2 = q * q;
+  const cTail = 386 / (1 + 69.9 * q ** 1.08); // eq. 20
   const ks = k * p.soundHorizon;
-  const ks4 = (ks / 5.4) ** 4;
-  const f = 1 / (1 + ks4); // eq. 18
-  const tc = f * pressurelessTransfer(q, 1, p.betaC) + (1 - f) * pressurelessTransfer(q, p.alphaC, p.betaC); // eq. 17
-  const sTilde = p.soundHorizon / Math.cbrt(1 + (p.betaNode / ks) ** 3); // eq. 22
+  const r = ks / 5.4;
+  const r2 = r * r;
+  const f = 1 / (1 + r2 * r2); // eq. 18
+  const tc = f * pressurelessTransfer(q, q2, cTail, 1, p.betaC) + (1 - f) * pressurelessTransfer(q, q2, cTail, p.alphaC, p.betaC); // eq. 17
+  const node = p.betaNode / ks;
+  const sTilde = p.soundHorizon / Math.cbrt(1 + node * node * node); // eq. 22
   const x = k * sTilde;
   const j0 = x < 1e-4 ? 1 - (x * x) / 6 : Math.sin(x) / x;
+  const b = p.betaB / ks;
+  const u = ks / 5.2;
   const tb =
-    (pressurelessTransfer(q, 1, 1) / (1 + (ks / 5.2) ** 2) +
-      (p.alphaB / (1 + (p.betaB / ks) ** 3)) * Math.exp(-((k / p.kSilk) ** 1.4))) *
+    (pressurelessTransfer(q, q2, cTail, 1, 1) / (1 + u * u) +
+      (p.alphaB / (1 + b * b * b)) * Math.exp(-((k / p.kSilk) ** 1.4))) *
     j0; // eq. 21
   return p.fb * tb + p.fc * tc; // eq. 16
 }

@@ -17,6 +17,11 @@ export interface EisensteinHu99 {
   readonly betaC: number;
   readonly soundHorizonFit: number;
   readonly theta2: number;
+  /** k-independent factors of eqs. 14, 22, 23 and 13. */
+  readonly yFsPerK2: number;
+  readonly qNuPerK: number;
+  readonly bAmplitude: number;
+  readonly fCbPow: number;
 }
 
 /** omega_m includes the neutrinos; nNu degenerate massive species share omega_nu. */
@@ -54,6 +59,10 @@ export function eisensteinHu99(
     betaC: 1 / (1 - 0.949 * fNuB), // eq. 21
     soundHorizonFit: (44.5 * Math.log(9.83 / omegaM)) / Math.sqrt(1 + 10 * omegaB ** 0.75), // eq. 4
     theta2,
+    yFsPerK2: fNu > 0 ? 17.2 * fNu * (1 + 0.488 * fNu ** (-7 / 6)) * ((nNu * h * theta2) / (omegaM * fNu)) ** 2 : 0, // eq. 14 over k^2
+    qNuPerK: fNu > 0 ? (3.92 * h * theta2 * Math.sqrt(nNu / fNu)) / omegaM : 0, // eq. 23 over k
+    bAmplitude: 1.24 * fNu ** 0.64 * nNu ** (0.3 + 0.6 * fNu), // eq. 22
+    fCbPow: pCb > 0 ? fCb ** (0.7 / pCb) : 1,
   };
 }
 
@@ -67,10 +76,9 @@ export function masterTransferEH99(p: EisensteinHu99, kH: number): number {
   const c = 14.4 + 325 / (1 + 60.5 * qEff ** 1.08); // eq. 20
   const tSup = l / (l + c * qEff * qEff); // eq. 18
   if (p.fNu === 0) return tSup;
-  const q = (k * p.theta2) / p.omegaM; // eq. 5
-  const qNu = 3.92 * q * Math.sqrt(p.nNu / p.fNu); // eq. 23
-  const b = 1 + (1.24 * p.fNu ** 0.64 * p.nNu ** (0.3 + 0.6 * p.fNu)) / (qNu ** -1.6 + qNu ** 0.8); // eq. 22
-  return tSup * b;
+  const qNu = p.qNuPerK * kH;
+  const q08 = qNu ** 0.8;
+  return tSup * (1 + p.bAmplitude / (1 / (q08 * q08) + q08)); // eqs. 22, 24
 }
 
 /**
@@ -86,18 +94,16 @@ export interface NeutrinoGrowth {
   totalRate: number;
 }
 
+/** y_fs(k) of eq. 14. */
 export function freeStreamingFactor(p: EisensteinHu99, kH: number): number {
-  const q = (kH * p.h * p.theta2) / p.omegaM;
-  const x = (p.nNu * q) / p.fNu;
-  return 17.2 * p.fNu * (1 + 0.488 * p.fNu ** (-7 / 6)) * x * x; // eq. 14
+  return p.yFsPerK2 * kH * kH;
 }
 
 export function neutrinoGrowthEH99(p: EisensteinHu99, yFs: number, d1: number, out: NeutrinoGrowth): NeutrinoGrowth {
   const pc = p.pCb;
   const x07 = (d1 / (1 + yFs)) ** 0.7;
-  const fcb07 = p.fCb ** (0.7 / pc);
   const coldBase = 1 + x07;
-  const totalBase = fcb07 + x07;
+  const totalBase = p.fCbPow + x07;
   const d1Pow = d1 ** -pc;
   out.cold = coldBase ** (pc / 0.7) * d1Pow; // eq. 12 divided by D1
   out.total = totalBase ** (pc / 0.7) * d1Pow; // eq. 13 divided by D1

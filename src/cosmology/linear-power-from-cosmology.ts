@@ -7,12 +7,12 @@ import { eisensteinHu98, transferEH98, transferNoWiggleEH98 } from './eisenstein
 import {
   eisensteinHu99,
   freeStreamingFactor,
-  masterTransferEH99,
   neutrinoGrowthEH99,
   type EisensteinHu99,
   type NeutrinoGrowth,
 } from './eisenstein-hu-1999.js';
 import { GrowthHistory } from './growth-history.js';
+import { NeutrinoSuppressionTable } from './neutrino-suppression-table.js';
 import { HUBBLE_DISTANCE_MPC_H, NEUTRINO_EV_PER_OMEGA } from './physical-constants.js';
 import { topHatSigma } from './top-hat-variance.js';
 
@@ -73,7 +73,10 @@ export class CosmologyLinearPower implements LinearSpectrum {
   readonly soundHorizonDrag: number;
   private readonly eh99: EisensteinHu99 | undefined;
   private readonly d1: number;
-  private readonly splines: { cold: LogLogSpline; coldNw: LogLogSpline; matter: LogLogSpline; matterNw: LogLogSpline };
+  private readonly coldSpline: LogLogSpline;
+  private readonly coldNoWiggleSpline: LogLogSpline;
+  /** Built on first use: most callers only need the cold field. */
+  private matterSplines: { wiggle: LogLogSpline; noWiggle: LogLogSpline } | undefined;
 
   constructor(params: CosmologyParameters, redshift: number, options: LinearPowerOptions = {}) {
     if (!(redshift >= 0 && redshift <= 20)) throw new RangeError(`redshift must lie in [0, 20], got ${redshift}`);
@@ -114,32 +117,38 @@ export class CosmologyLinearPower implements LinearSpectrum {
     const matter = new Float64Array(n);
     const matterNw = new Float64Array(n);
     const matterToday = new Float64Array(n);
-    const g: NeutrinoGrowth = { cold: 1, total: 1, coldRate: 1, totalRate: 1 };
-    const g0: NeutrinoGrowth = { cold: 1, total: 1, coldRate: 1, totalRate: 1 };
+    const nuTable =
+      eh99 && eh99NoNu
+        ? new NeutrinoSuppressionTable(eh99, eh99NoNu, lnK0, lnK0 + (n - 1) * dlnK, Math.ceil(n / 8) + 1, this.d1, d1Today)
+        : undefined;
     const hubble4 = HUBBLE_DISTANCE_MPC_H ** 4;
     const omegaM0 = omegaM / (h * h);
     const shape = ((8 * Math.PI * Math.PI) / 25) * (hubble4 / (omegaM0 * omegaM0));
     const tilt = params.ns - 1;
     for (let i = 0; i < n; i++) {
-      const ki = Math.exp(lnK0 + i * dlnK);
+      const lnK = lnK0 + i * dlnK;
+      const ki = Math.exp(lnK);
       k[i] = ki;
       let ratio = 1;
-      if (eh99 && eh99NoNu) {
-        ratio = masterTransferEH99(eh99, ki) / masterTransferEH99(eh99NoNu, ki);
-        const yFs = freeStreamingFactor(eh99, ki);
-        neutrinoGrowthEH99(eh99, yFs, this.d1, g);
-        neutrinoGrowthEH99(eh99, yFs, d1Today, g0);
+      let gCold = 1;
+      let gTotal = 1;
+      let gToday = 1;
+      if (nuTable) {
+        ratio = nuTable.transferRatio.at(lnK);
+        gCold = nuTable.coldGrowth.at(lnK);
+        gTotal = nuTable.totalGrowth.at(lnK);
+        gToday = nuTable.totalGrowthOther.at(lnK);
       }
       const tw = transferEH98(eh98, ki) * ratio;
       const tnw = transferNoWiggleEH98(eh98, ki) * ratio;
       const prim = shape * ki * Math.exp(tilt * Math.log((ki * h) / PIVOT_MPC));
-      const c2 = prim * (g.cold * dz) ** 2;
-      const m2 = prim * (g.total * dz) ** 2;
+      const c2 = prim * (gCold * dz) ** 2;
+      const m2 = prim * (gTotal * dz) ** 2;
       cold[i] = c2 * tw * tw;
       coldNw[i] = c2 * tnw * tnw;
       matter[i] = m2 * tw * tw;
       matterNw[i] = m2 * tnw * tnw;
-      matterToday[i] = prim * (g0.total * d0 * tw) ** 2;
+      matterToday[i] = prim * (gToday * d0 * tw) ** 2;
     }
     // Amplitude: A_s given, or fixed by sigma8 of the total matter at z = 0.
     const sigma8UnitToday = topHatSigma(lnK0, dlnK, matterToday, 8);
@@ -164,12 +173,9 @@ export class CosmologyLinearPower implements LinearSpectrum {
     this.powerMatterNoWiggleGrid = matterNw;
     const coldSpline = new LogLogSpline(k, cold);
     const coldNwSpline = new LogLogSpline(k, coldNw);
-    this.splines = {
-      cold: coldSpline,
-      coldNw: coldNwSpline,
-      matter: massive ? new LogLogSpline(k, matter) : coldSpline,
-      matterNw: massive ? new LogLogSpline(k, matterNw) : coldNwSpline,
-    };
+    this.coldSpline = coldSpline;
+    this.coldNoWiggleSpline = coldNwSpline;
+    if (!massive) this.matterSplines = { wiggle: coldSpline, noWiggle: coldNwSpline };
     const damping = baoDampingScales(
       (q) => coldNwSpline.at(q),
       options.baoScale ?? DEFAULT_BAO_SCALE,
@@ -181,20 +187,28 @@ export class CosmologyLinearPower implements LinearSpectrum {
 
   /** Linear power of the cold (cdm + baryon) field, (Mpc/h)^3. */
   power(k: number): number {
-    return this.splines.cold.at(k);
+    return this.coldSpline.at(k);
   }
 
   powerNoWiggle(k: number): number {
-    return this.splines.coldNw.at(k);
+    return this.coldNoWiggleSpline.at(k);
+  }
+
+  private matter(): { wiggle: LogLogSpline; noWiggle: LogLogSpline } {
+    this.matterSplines ??= {
+      wiggle: new LogLogSpline(this.k, this.powerMatterGrid),
+      noWiggle: new LogLogSpline(this.k, this.powerMatterNoWiggleGrid),
+    };
+    return this.matterSplines;
   }
 
   /** Linear power of the total matter (cold + neutrinos). */
   powerMatter(k: number): number {
-    return this.splines.matter.at(k);
+    return this.matter().wiggle.at(k);
   }
 
   powerMatterNoWiggle(k: number): number {
-    return this.splines.matterNw.at(k);
+    return this.matter().noWiggle.at(k);
   }
 
   private neutrinoGrowthAt(k: number): NeutrinoGrowth | undefined {
