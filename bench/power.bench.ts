@@ -1,7 +1,7 @@
 import type { Benchmark } from './harness.js';
 import { timeMedian } from './harness.js';
 import { PLANCK_2018, linearPowerFromCosmology } from '../src/cosmology/index.js';
-import { PowerMultipoleModel, type PowerBinAveraging } from '../src/power/index.js';
+import { PowerMultipoleModel, latticeBinModes, type PowerBinAveraging } from '../src/power/index.js';
 
 /**
  * Power-spectrum multipoles P0, P2, P4 in 40 k bins (0.01 to 0.40 h/Mpc): the
@@ -25,12 +25,14 @@ const bench: Benchmark = {
     let b1 = 2;
     const out = new Float64Array(model.entries.length);
     let alpha = 1;
+    let box = 1000;
     return {
       setup: '3 multipoles x 40 k bins, 12 Gauss-Legendre nodes in mu, Planck 2018 EH spectrum at z = 0.5',
       linearSpectrumMs: timeMedian(() => linearPowerFromCosmology(PLANCK_2018, 0.5), 10, 2),
       newSpectrumModelBuildAndEvaluateMs: timeMedian(buildAndEvaluate({ kind: 'centre' }), 30, 5),
       newSpectrumModelBuildMeanKMs: timeMedian(buildAndEvaluate({ kind: 'mean-k' }), 30, 5),
-      newSpectrumLatticeBox1000Ms: timeMedian(buildAndEvaluate({ kind: 'lattice', boxSize: 1000 }), 5, 1),
+      latticeModesEnumerationBox1000Ms: timeMedian(() => latticeBinModes((box += 1e-9), bins), 3, 0),
+      newSpectrumLatticeBox1000Ms: timeMedian(buildAndEvaluate({ kind: 'lattice', boxSize: 1000 }), 10, 2),
       templateReevaluationMs: timeMedian(() => model.evaluate({ ...nuisance, b1: (b1 += 1e-6) }, out), 2000, 200),
       alphaChangeRebuildMs: timeMedian(() => model.evaluate({ ...nuisance, alphaPar: (alpha += 1e-6) }, out), 30, 5),
       directEvaluationMs: timeMedian(() => model.evaluateDirect(nuisance, out), 30, 5),

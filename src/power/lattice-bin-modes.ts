@@ -18,10 +18,27 @@ export interface LatticeBinModes {
   readonly multiplicity: Float64Array;
 }
 
-/** Mode groups, counts and mean k of every bin; the zero vector is never a mode. */
-export function latticeBinModes(boxSize: number, bins: PowerKBins): LatticeBinModes[] {
+/** Recent results by (boxSize, bins): they do not depend on the spectrum, so models for new spectra reuse them. */
+const cache = new Map<string, readonly LatticeBinModes[]>();
+const CACHE_SIZE = 8;
+
+/**
+ * Mode groups, counts and mean k of every bin; the zero vector is never a mode.
+ * The result is shared between callers: do not modify its arrays.
+ */
+export function latticeBinModes(boxSize: number, bins: PowerKBins): readonly LatticeBinModes[] {
   if (!Number.isFinite(boxSize) || boxSize <= 0) throw new InputError(`boxSize must be a positive length in Mpc/h, got ${boxSize}`);
   validatePowerKBins(bins);
+  const key = `${boxSize}|${bins.kMin}|${bins.dk}|${bins.count}`;
+  const hit = cache.get(key);
+  if (hit) return hit;
+  const modes = enumerateBinModes(boxSize, bins);
+  if (cache.size >= CACHE_SIZE) cache.delete(cache.keys().next().value as string);
+  cache.set(key, modes);
+  return modes;
+}
+
+function enumerateBinModes(boxSize: number, bins: PowerKBins): LatticeBinModes[] {
   const kf = fundamentalFrequency(boxSize);
   const out: LatticeBinModes[] = [];
   for (let i = 0; i < bins.count; i++) {

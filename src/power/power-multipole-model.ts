@@ -64,6 +64,7 @@ export class PowerMultipoleModel implements StatisticModel {
   evaluate(params: ParameterValues, out?: Float64Array): Float64Array {
     const p = this.resolve(params);
     const target = out ?? new Float64Array(this.entries.length);
+    if (target.length !== this.entries.length) throw new RangeError(`output has length ${target.length}, the model ${this.entries.length}`);
     return combinePowerTemplates(this.templatesFor(p), powerTemplateCoefficients(p), target);
   }
 

@@ -27,6 +27,12 @@ describe('k-bin averaging', () => {
     });
   });
 
+  it('reuses the enumeration for the same box and bins (it does not depend on the spectrum)', () => {
+    const bins = { kMin: 0.02, dk: 0.02, count: 3 };
+    expect(latticeBinModes(700, bins)).toBe(latticeBinModes(700, { ...bins }));
+    expect(latticeBinModes(700, bins)).not.toBe(latticeBinModes(701, bins));
+  });
+
   it('continuum mode count 4 pi (b^3 - a^3) / (3 k_f^3) matches the lattice for thick shells (common practice)', () => {
     const modes = latticeBinModes(3000, { kMin: 0.1, dk: 0.01, count: 1 });
     expect(Math.abs(modes[0].modeCount / continuumModeCount(3000, 0.095, 0.105) - 1)).toBeLessThan(0.01);
