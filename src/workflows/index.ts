@@ -1,1 +1,2 @@
 export * from './scale-cuts/theory-error-covariance.js';
+export * from './forecast/survey.js';
