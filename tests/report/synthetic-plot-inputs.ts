@@ -5,6 +5,7 @@
  * on these shapes.
  */
 import { enumerateTriangleBins, shellGrid } from '../../src/bispectrum/triangle-bins.js';
+import { poolDraws } from '../../src/inference/diagnostics/pool-draws.js';
 import { Random } from '../../src/numerics/random.js';
 import type { BispectrumPlotInput } from '../../src/report/plots/bispectrum-plot.js';
 import type { CornerPlotInput } from '../../src/report/plots/corner-plot.js';
@@ -38,21 +39,10 @@ export function syntheticChains(chains: number, steps: number, seed: number): Fl
   return out;
 }
 
-function pooled(chains: readonly Float64Array[], burnIn: number): Float64Array {
-  const parts = chains.map((c) => c.subarray(burnIn));
-  const all = new Float64Array(parts.reduce((n, p) => n + p.length, 0));
-  let at = 0;
-  for (const p of parts) {
-    all.set(p, at);
-    at += p.length;
-  }
-  return all;
-}
-
 export function syntheticCornerInput(chains: Float64Array[][], burnIn: number): CornerPlotInput {
   return {
     parameters: SYNTHETIC_PARAMETERS.map((p) => ({ label: p.label, truth: p.truth })),
-    sets: [{ label: 'P + B', samples: chains.map((c) => pooled(c, burnIn)) }],
+    sets: [{ label: 'P + B', samples: chains.map((c) => poolDraws(c.map((x) => x.subarray(burnIn)))) }],
   };
 }
 
