@@ -13,3 +13,4 @@ export * from './covariance/gaussian-power-covariance.js';
 export * from './covariance/gaussian-bispectrum-variance.js';
 export * from './covariance/power-bispectrum-cross.js';
 export * from './covariance/covariance-choice.js';
+export * from './write-measurement-bundle.js';
