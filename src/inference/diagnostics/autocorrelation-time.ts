@@ -1,4 +1,4 @@
-import { autocovariance } from './autocovariance.js';
+import { summedAutocovariance } from './autocovariance.js';
 
 /** Sokal's window constant: the window M is the smallest lag with M >= c tau(M). */
 export const defaultWindowFactor = 5;
@@ -28,16 +28,11 @@ export function integratedAutocorrelationTime(
   if (series.length === 0) throw new RangeError('integratedAutocorrelationTime: no series given');
   const n = series[0].length;
   if (n < 2) return { tau: 1, window: 0, converged: false };
-  const mean = new Float64Array(n);
-  for (const s of series) {
-    if (s.length !== n) throw new RangeError('integratedAutocorrelationTime: series of unequal length');
-    const acov = autocovariance(s);
-    for (let t = 0; t < n; t++) mean[t] += acov[t];
-  }
-  if (!(mean[0] > 0)) return { tau: 1, window: 0, converged: false }; // constant chains
+  const acov = summedAutocovariance(series); // a sum over series: the normalisation cancels below
+  if (!(acov[0] > 0)) return { tau: 1, window: 0, converged: false }; // constant chains
   let tau = 1;
   for (let m = 1; m < n; m++) {
-    tau += (2 * mean[m]) / mean[0];
+    tau += (2 * acov[m]) / acov[0];
     if (m >= windowFactor * tau) return { tau, window: m, converged: true };
   }
   return { tau, window: n - 1, converged: false };

@@ -1,4 +1,4 @@
-import { autocovariance } from './autocovariance.js';
+import { summedAutocovariance } from './autocovariance.js';
 import { chainMoments } from './chain-moments.js';
 import { pooledQuantile } from './pooled-quantile.js';
 import { rankNormalize } from './rank-normalize.js';
@@ -17,11 +17,7 @@ export function effectiveSampleSize(chains: readonly Float64Array[]): number {
   if (n < 4) return Number.NaN;
   const { within, pooled } = chainMoments(chains);
   if (!(pooled > 0)) return Number.NaN;
-  const meanAcov = new Float64Array(n);
-  for (const c of chains) {
-    const acov = autocovariance(c);
-    for (let t = 0; t < n; t++) meanAcov[t] += acov[t] / m;
-  }
+  const meanAcov = summedAutocovariance(chains).map((v) => v / m);
   const rho = (t: number) => (t === 0 ? 1 : 1 - (within - meanAcov[t]) / pooled);
   let tau = -1;
   let previous = Infinity;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { Random } from '../../../src/numerics/random.js';
-import { autocovariance } from '../../../src/inference/diagnostics/autocovariance.js';
+import { autocovariance, summedAutocovariance } from '../../../src/inference/diagnostics/autocovariance.js';
 import { integratedAutocorrelationTime } from '../../../src/inference/diagnostics/autocorrelation-time.js';
 
 function ar1(random: Random, n: number, phi: number): Float64Array {
@@ -23,6 +23,14 @@ describe('integrated autocorrelation time', () => {
       for (let i = 0; i + t < x.length; i++) s += (x[i] - mean) * (x[i + t] - mean);
       expect(acov[t]).toBeCloseTo(s / x.length, 11);
     }
+  });
+
+  it('the summed autocovariance of three series (paired in complex transforms) equals the sum of each', () => {
+    const random = new Random(4);
+    const xs = [ar1(random, 90, 0.3), ar1(random, 90, 0.8), ar1(random, 90, -0.4)];
+    const sum = summedAutocovariance(xs);
+    const each = xs.map((x) => autocovariance(x));
+    for (const t of [0, 1, 7, 89]) expect(sum[t]).toBeCloseTo(each[0][t] + each[1][t] + each[2][t], 11);
   });
 
   it('recovers tau = (1 + phi)/(1 - phi) of AR(1) chains within the windowed-estimator error', () => {
