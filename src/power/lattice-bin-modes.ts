@@ -61,7 +61,8 @@ function enumerateBinModes(boxSize: number, bins: PowerKBins): LatticeBinModes[]
     let count = 0;
     let sumK = 0;
     let g = 0;
-    for (const [key, m] of groups) {
+    // Sorted by (|n|^2, n_z^2): groups of equal k sit together, so models can reuse what depends on k alone.
+    for (const [key, m] of [...groups].sort((a, b) => a[0] - b[0])) {
       const n2 = Math.floor(key / stride);
       const nz2 = key - n2 * stride;
       k[g] = kf * Math.sqrt(n2);

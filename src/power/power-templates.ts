@@ -27,10 +27,15 @@ export function buildPowerTemplates(setup: PowerModelSetup, alphaPar: number, al
   const volume = apVolumeFactor(alphaPar, alphaPerp);
   const n = q.length;
   const point = POWER_TEMPLATE_TERMS.map(() => new Float64Array(n));
+  let lastQ = Number.NaN;
+  let r = 0;
   for (let j = 0; j < n; j++) {
     const q2 = q[j] * q[j];
     const n2 = nu[j] * nu[j];
-    const r = spectrum.growthRate(q[j]) / spectrum.growthRateLargeScale;
+    if (q[j] !== lastQ) {
+      r = spectrum.growthRate(q[j]) / spectrum.growthRateLargeScale; // points of equal q are adjacent
+      lastQ = q[j];
+    }
     const pv = irResummedPower(spectrum, q[j], nu[j], dampingGrowthRate) * volume;
     const kmu2 = (sampling.k[j] * sampling.mu[j]) ** 2;
     point[0][j] = pv;
