@@ -4,7 +4,7 @@ import { RealFourier3d } from '../numerics/fft-3d.js';
 import { checkMesh, meshVolume, type Mesh } from './mesh.js';
 import { shellFilteredField, type ShellWeighting } from './shell-filtered-field.js';
 import { shellModesOf, type ShellModes } from './shell-modes.js';
-import { accumulateTriangleSums, triangleSumPasses } from './triangle-sums.js';
+import { accumulateTriangleSums, binsNeedingShift, shellsUsed } from './triangle-sums.js';
 
 /** Measured bispectrum multipoles, one entry per triangle bin (order of `bins`). */
 export interface MeasuredBispectrum {
@@ -19,23 +19,48 @@ export interface MeasuredBispectrum {
 interface Prepared {
   readonly fourier: RealFourier3d;
   readonly modes: ShellModes[];
-  readonly passes: boolean[];
+  readonly shifted: Uint8Array;
+  readonly shiftedShells: Uint8Array;
+  readonly all: Uint8Array;
   readonly work: { spectrum: Float64Array; scratch: Float64Array };
 }
 
 function prepare(mesh: Mesh, bins: TriangleBins): Prepared {
   checkMesh(mesh);
   const fourier = new RealFourier3d(mesh.n);
+  const shifted = binsNeedingShift(mesh, bins);
   return {
     fourier,
     modes: shellModesOf(mesh, bins.shells),
-    passes: triangleSumPasses(mesh, bins),
+    shifted,
+    shiftedShells: shellsUsed(bins, shifted),
+    all: new Uint8Array(bins.shells.count).fill(1),
     work: { spectrum: fourier.createSpectrum(), scratch: fourier.createSpectrum() },
   };
 }
 
+const EMPTY = new Float64Array(0);
+
 function shellFields(p: Prepared, source: Float64Array | null, weighting: ShellWeighting, shifted: boolean): Float64Array[] {
-  return p.modes.map((m) => shellFilteredField(p.fourier, m, source, weighting, shifted, p.work));
+  const wanted = shifted ? p.shiftedShells : p.all;
+  return p.modes.map((m, s) => (wanted[s] ? shellFilteredField(p.fourier, m, source, weighting, shifted, p.work) : EMPTY));
+}
+
+/**
+ * Plain sums over grid points for every bin, and for the bins that need it the
+ * mean with the shifted sums (binsNeedingShift): one array per kind.
+ */
+function exactTriangleSums(p: Prepared, bins: TriangleBins, source: Float64Array | null): Float64Array[] {
+  const kinds = source === null ? 1 : 2;
+  const plain = Array.from({ length: kinds }, () => new Float64Array(bins.size));
+  const shifted = Array.from({ length: kinds }, () => new Float64Array(bins.size));
+  for (const [pass, out] of [[false, plain], [true, shifted]] as const) {
+    if (pass && !p.shifted.some((v) => v === 1)) continue;
+    const unit = shellFields(p, source, 'unit', pass);
+    const first = source === null ? [unit] : [unit, shellFields(p, source, 'legendre2', pass)];
+    accumulateTriangleSums(bins, first, unit, out, pass ? p.shifted : undefined);
+  }
+  return plain.map((sums, t) => sums.map((v, b) => (p.shifted[b] ? 0.5 * (v + shifted[t][b]) : v)));
 }
 
 /**
@@ -43,19 +68,14 @@ function shellFields(p: Prepared, source: Float64Array | null, weighting: ShellW
  * N_123 = n^6 sum_x I_i(x) I_j(x) I_l(x) (docs/conventions.md, "Mocks").
  */
 export function countTrianglesByFft(mesh: Mesh, bins: TriangleBins): Float64Array {
-  const p = prepare(mesh, bins);
-  const sums = new Float64Array(bins.size);
-  for (const shifted of p.passes) {
-    const indicator = shellFields(p, null, 'unit', shifted);
-    accumulateTriangleSums(bins, [indicator], indicator, [sums]);
-  }
-  const scale = mesh.n ** 6 / p.passes.length;
+  const [sums] = exactTriangleSums(prepare(mesh, bins), bins, null);
+  const scale = mesh.n ** 6;
   return sums.map((v) => Math.round(v * scale));
 }
 
 /**
  * FFT bispectrum estimator with shell-filtered fields (Scoccimarro's method,
- * PRD 70 (2004) 083007 and Phys. Rev. D 92 (2015) 083532, from memory):
+ * PRD 70 (2004) 083007 and PRD 92 (2015) 083532, from memory):
  *   B_L(bin) = (2L + 1) (V^2 / n^3) sum_x D^(L)_i(x) D_j(x) D_l(x) / N_123,
  * with D the shell-filtered fields of the discrete transform F of the field
  * and D^(2) carrying L_2(mu) on the first side. `counts` (from
@@ -75,14 +95,8 @@ export function measureBispectrumMultipoles(
   if (spectrum.length !== p.fourier.spectrumLength) {
     throw new InputError(`bispectrum: the spectrum has ${spectrum.length} values, a ${mesh.n}^3 mesh needs ${p.fourier.spectrumLength}`);
   }
-  const s0 = new Float64Array(bins.size);
-  const s2 = new Float64Array(bins.size);
-  for (const shifted of p.passes) {
-    const plain = shellFields(p, spectrum, 'unit', shifted);
-    const weighted = shellFields(p, spectrum, 'legendre2', shifted);
-    accumulateTriangleSums(bins, [plain, weighted], plain, [s0, s2]);
-  }
-  const scale = meshVolume(mesh) ** 2 / mesh.n ** 3 / p.passes.length;
+  const [s0, s2] = exactTriangleSums(p, bins, spectrum);
+  const scale = meshVolume(mesh) ** 2 / mesh.n ** 3;
   const b0 = new Float64Array(bins.size);
   const b2 = new Float64Array(bins.size);
   for (let b = 0; b < bins.size; b++) {

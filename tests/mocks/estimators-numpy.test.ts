@@ -4,7 +4,7 @@ import { RealFourier3d } from '../../src/numerics/fft-3d.js';
 import { fundamentalFrequency } from '../../src/numerics/lattice-shell.js';
 import { countTrianglesByFft, measureBispectrumMultipoles } from '../../src/mocks/bispectrum-multipoles.js';
 import { measurePowerMultipoles } from '../../src/mocks/power-multipoles.js';
-import { triangleSumPasses } from '../../src/mocks/triangle-sums.js';
+import { binsNeedingShift } from '../../src/mocks/triangle-sums.js';
 import { numpyMockFixture } from './numpy-fixture.js';
 
 // Reference: numpy.fft.fftn and brute-force mode and triangle sums,
@@ -28,8 +28,11 @@ describe('FFT estimators against numpy brute force on a 16^3 field', () => {
     });
   });
 
-  it('needs the shifted pass for these bins (they reach 7 k_f on a 16 mesh)', () => {
-    expect(triangleSumPasses(mesh, enumerateTriangleBins(shells))).toEqual([false, true]);
+  it('needs the shifted sums exactly for the bins whose upper edges sum to n k_f or more', () => {
+    // Upper edges 3, 5, 7 k_f on a 16 mesh: (2,1,1) and (2,2,0) sum to 17, (2,2,1) to 19, (2,2,2) to 21 k_f.
+    const need = binsNeedingShift(mesh, enumerateTriangleBins(shells));
+    const flagged = fx.triangles.filter((_, b) => need[b] === 1).map((t) => t.bin.join(''));
+    expect(flagged).toEqual(['211', '220', '221', '222']);
   });
 
   it('triangle counts equal the brute-force enumeration', () => {
