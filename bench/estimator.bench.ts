@@ -42,7 +42,7 @@ const bench: Benchmark = {
     const fftInverse = seconds(() => fourier.inverse(spectrum, field));
     const gauss = gaussianFieldSpectrum(mesh, (k) => 2e4 * (k / 0.02) / (1 + (k / 0.02) ** 2) ** 1.2, 1);
     const powerSeconds = seconds(() => measurePowerMultipoles(gauss, mesh, shells));
-    let counts = new Float64Array(0);
+    let counts: Float64Array = new Float64Array(0);
     const countSeconds = seconds(() => (counts = countTrianglesByFft(mesh, bins)));
     const bispectrumSeconds = seconds(() => measureBispectrumMultipoles(gauss, mesh, bins, { counts }));
     clearInterval(sampler);
