@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/contracts/input-error.js';
+import { PLANCK_2018, linearPowerFromCosmology, linearSpectrumFromTable, parsePowerTable } from '../../src/cosmology/index.js';
 import { PowerMultipoleModel, type PowerModelOptions } from '../../src/power/index.js';
 import { analyticSpectrum } from './support/analytic-spectrum.js';
 
@@ -23,6 +24,16 @@ describe('bad input to the power model', () => {
     );
     const model = new PowerMultipoleModel({ ...base, bins: { kMin: 0.02, dk: 0.02, count: 24 } });
     expect(failure(() => model.evaluate({ alphaPar: 0.9, alphaPerp: 0.9 })).message).toMatch(/alphaPar=0\.9, alphaPerp=0\.9/);
+  });
+
+  it('k beyond a user power table', () => {
+    const eh = linearPowerFromCosmology(PLANCK_2018, 0.5);
+    const rows = Array.from({ length: 40 }, (_, i) => 1e-3 * 300 ** (i / 39)); // 1e-3 .. 0.3 h/Mpc
+    const table = parsePowerTable(rows.map((k) => `${k} ${eh.power(k)}`).join('\n'), 'pk.txt');
+    const spectrum = linearSpectrumFromTable(table, PLANCK_2018, 0.5);
+    const bins = { kMin: 0.01, dk: 0.01, count: 40 };
+    expect(failure(() => new PowerMultipoleModel({ spectrum, bins, nbar: 1e-3 })).message).toMatch(/^bins: k = 0\.31 h\/Mpc lies outside/);
+    expect(() => new PowerMultipoleModel({ spectrum, bins: { ...bins, count: 30 }, nbar: 1e-3 })).not.toThrow();
   });
 
   it('negative or missing number density', () => {
