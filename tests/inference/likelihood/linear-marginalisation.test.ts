@@ -42,17 +42,39 @@ function bruteForce(model: ToyModel, nonlinear: Record<string, number>, data: Fl
   const centre = solve(F, b).to1DArray();
   const width = solve(F, Matrix.eye(p, p)).diag().map((v) => 8 * Math.sqrt(v));
   const rules = centre.map((c, j) => gaussLegendreOn(nodes, c - width[j], c + width[j]));
-  const logPrior = (theta: number[]) =>
-    priors.reduce((s, pr, j) => (pr.sigma === Infinity ? s : s - 0.5 * ((theta[j] - pr.mean) / pr.sigma) ** 2 - Math.log(pr.sigma * Math.sqrt(2 * Math.PI))), 0);
+  const logPrior = (theta: number[]) => {
+    let s = 0;
+    for (let j = 0; j < p; j++) {
+      const pr = priors[j];
+      if (pr.sigma !== Infinity) s -= 0.5 * ((theta[j] - pr.mean) / pr.sigma) ** 2 + Math.log(pr.sigma * Math.sqrt(2 * Math.PI));
+    }
+    return s;
+  };
   // Log-sum-exp over the grid, shifted by the value at the centre.
-  const at = (theta: number[]) => dense.logDensityFast(data, model.evaluate({ ...nonlinear, ...Object.fromEntries(names.map((n, j) => [n, theta[j]])) })) + logPrior(theta);
+  // The model at theta from model.evaluate alone: the base at theta = 0 plus the
+  // response to each unit theta_j (exact for a model linear in theta).
+  const zero = Object.fromEntries(names.map((n) => [n, 0]));
+  const base = model.evaluate({ ...nonlinear, ...zero });
+  const unit = names.map((n) => model.evaluate({ ...nonlinear, ...zero, [n]: 1 }).map((v, i) => v - base[i]));
+  const m = new Float64Array(N);
+  const at = (theta: number[]) => {
+    for (let i = 0; i < N; i++) {
+      let v = base[i];
+      for (let j = 0; j < p; j++) v += theta[j] * unit[j][i];
+      m[i] = v;
+    }
+    return dense.logDensityFast(data, m) + logPrior(theta);
+  };
   const ref = at(centre);
   let sum = 0;
   const idx = new Array(p).fill(0);
+  const theta = new Array(p).fill(0);
   for (;;) {
-    const theta = idx.map((q, j) => rules[j].nodes[q]);
     let w = 1;
-    idx.forEach((q, j) => (w *= rules[j].weights[q]));
+    for (let j = 0; j < p; j++) {
+      theta[j] = rules[j].nodes[idx[j]];
+      w *= rules[j].weights[idx[j]];
+    }
     sum += w * Math.exp(at(theta) - ref);
     let j = 0;
     while (j < p && ++idx[j] === nodes) idx[j++] = 0;

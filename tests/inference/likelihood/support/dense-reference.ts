@@ -23,6 +23,7 @@ export class DenseGaussian {
   readonly precision: Matrix;
   readonly logDet: number;
   readonly flatPrecision: Float64Array;
+  private readonly scratch: Float64Array;
   constructor(
     cov: Float64Array,
     readonly n: number,
@@ -31,6 +32,7 @@ export class DenseGaussian {
     this.precision = inverse(m);
     this.logDet = Math.log(determinant(m));
     this.flatPrecision = Float64Array.from(this.precision.to1DArray());
+    this.scratch = new Float64Array(n);
   }
 
   /** ln N(d; m, C). */
@@ -43,7 +45,8 @@ export class DenseGaussian {
   /** The same with the precision as a flat array (fast loops for brute-force integrals). */
   logDensityFast(d: Float64Array, m: Float64Array): number {
     const n = this.n;
-    const r = Float64Array.from(d, (v, i) => v - m[i]);
+    const r = this.scratch;
+    for (let i = 0; i < n; i++) r[i] = d[i] - m[i];
     let chi2 = 0;
     for (let i = 0; i < n; i++) {
       let s = 0;
