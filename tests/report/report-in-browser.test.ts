@@ -53,9 +53,9 @@ describe('the HTML report in headless Chromium', () => {
   });
 
   it('opens with no console errors or outside requests, every plot visible and drawn', async () => {
+    const page = await browser().newPage();
     const file = join(folder, 'report.html');
     writeFileSync(file, renderReportHtml(input));
-    const page = await browser().newPage();
     const problems: string[] = [];
     const requests: string[] = [];
     page.on('console', (m) => {
