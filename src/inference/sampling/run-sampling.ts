@@ -156,6 +156,7 @@ export async function runSampling(method: SamplingMethod, s: ValidatedRunSetting
     sidecar('running', null, null);
     if (!resuming) checkpoint(kernel);
     let lastCheckpoint = Date.now();
+    let lastYield = Date.now();
     let stopReason: SamplingResult['stopReason'];
     for (;;) {
       if (converged) {
@@ -187,6 +188,11 @@ export async function runSampling(method: SamplingMethod, s: ValidatedRunSetting
         lastCheckpoint = Date.now();
       }
       display.update(snapshot(kernel));
+      if (Date.now() - lastYield >= 50) {
+        // Let signals and timers in: evaluation on this thread never leaves the microtask queue.
+        await new Promise((resolve) => setImmediate(resolve));
+        lastYield = Date.now();
+      }
     }
     checkpoint(kernel);
     const diagnostics = method.summarize(history, kernel.accepted);

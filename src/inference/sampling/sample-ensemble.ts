@@ -10,7 +10,7 @@ export type EnsembleSamplingSettings = SamplingRunSettings & StretchMoveOptions;
  * the chain is long compared with its autocorrelation time (see
  * StretchMoveOptions and docs/conventions.md, "Sampling").
  */
-export function sampleEnsemble(settings: EnsembleSamplingSettings): Promise<SamplingResult> {
+export async function sampleEnsemble(settings: EnsembleSamplingSettings): Promise<SamplingResult> {
   const s = validateRunSettings(settings);
   return runSampling(stretchMoveMethod(s.parameters, settings), s);
 }

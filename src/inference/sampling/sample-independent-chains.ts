@@ -10,7 +10,7 @@ export type IndependentChainsSettings = SamplingRunSettings & AdaptiveMetropolis
  * when rank-normalised split R-hat and ESS say the chains agree (see
  * AdaptiveMetropolisOptions and docs/conventions.md, "Sampling").
  */
-export function sampleIndependentChains(settings: IndependentChainsSettings): Promise<SamplingResult> {
+export async function sampleIndependentChains(settings: IndependentChainsSettings): Promise<SamplingResult> {
   const s = validateRunSettings(settings);
   return runSampling(adaptiveMetropolisMethod(s.parameters, settings), s);
 }
