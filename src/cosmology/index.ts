@@ -24,3 +24,4 @@ export * from './wiggle-split.js';
 export * from './table-linear-spectrum.js';
 export * from './linear-theory-config.js';
 export * from './linear-theory-summary.js';
+export * from './linear-theory-csv.js';

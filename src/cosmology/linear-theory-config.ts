@@ -1,4 +1,5 @@
 import { readFileSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { InputError, InputErrors } from '../contracts/input-error.js';
 import { validateCosmology, type CosmologyParameters } from './cosmology-parameters.js';
 
@@ -12,6 +13,8 @@ export interface LinearTheoryConfig {
   readonly redshift: number;
   readonly cosmology: CosmologyParameters;
   readonly powerTable: string | undefined;
+  /** `powerTable` resolved against the directory of the config file. */
+  readonly powerTablePath: string | undefined;
   readonly file: string;
 }
 
@@ -64,6 +67,7 @@ export function parseLinearTheoryConfig(text: string, file: string): LinearTheor
     redshift: z as number,
     cosmology,
     powerTable: obj.powerTable as string | undefined,
+    powerTablePath: obj.powerTable === undefined ? undefined : resolve(dirname(file), obj.powerTable as string),
     file,
   };
 }

@@ -1,8 +1,9 @@
 import type { Command } from 'commander';
 import { registerDemo } from './demo.js';
+import { registerLinearTheory } from './linear-theory.js';
 import { registerPowerMultipoles } from './power-multipoles.js';
 
 /** Each command module exports a function that adds itself to the program. */
 export type RegisterCommand = (program: Command) => void;
 
-export const commands: RegisterCommand[] = [registerDemo, registerPowerMultipoles];
+export const commands: RegisterCommand[] = [registerDemo, registerLinearTheory, registerPowerMultipoles];
