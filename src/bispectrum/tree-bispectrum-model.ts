@@ -1,0 +1,150 @@
+import { InputError } from '../contracts/input-error.js';
+import type { DataVectorEntry, LinearDecomposition, ParameterValues, StatisticModel } from '../contracts/statistic-model.js';
+import { centreTriangleNodes, DEFAULT_ORIENTATION_NODES, DEFAULT_VOLUME_ORDER, effectiveTriangleNodes } from './bin-averaging.js';
+import { continuousBinNodes } from './continuous-bin-nodes.js';
+import { averageOverTriangleNodes } from './orientation-average.js';
+import { checkMultipoles, exactPolynomialOrientationRule, orientationRule, type OrientationRule } from './orientation-rule.js';
+import type { TriangleBins } from './triangle-bins.js';
+import type { TriangleNodeSet } from './triangle-node-set.js';
+import { combineTreeTemplates } from './tree-template-combination.js';
+import { TreeTemplateIntegrand } from './tree-template-integrand.js';
+import type { TreeBispectrumParameters } from './tree-template-terms.js';
+import { checkWavenumbersInTable, isOrientationPolynomial, resolveTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
+import { userTriangleNodes } from './user-triangles.js';
+
+export const BIN_AVERAGING_METHODS = ['centres', 'effective', 'continuous'] as const;
+export type BinAveragingMethod = (typeof BIN_AVERAGING_METHODS)[number];
+
+export interface TreeBispectrumModelOptions extends TreeBispectrumSettings {
+  /** Triangle bins (from enumerateTriangleBins), or else `triangles`. */
+  readonly bins?: TriangleBins;
+  /** A user list of triangles (k1, k2, k3), evaluated as given. */
+  readonly triangles?: readonly (readonly number[])[];
+  /** How bins are averaged; default 'continuous'. Ignored for `triangles`. */
+  readonly averaging?: BinAveragingMethod;
+  /** Even multipoles; default [0, 2]. */
+  readonly multipoles?: readonly number[];
+  /** Orientation nodes; default exact for the polynomial model, else DEFAULT_ORIENTATION_NODES. */
+  readonly orientationNodes?: { readonly mu: number; readonly phi: number };
+  /** Gauss–Legendre order of the continuous bin average; default DEFAULT_VOLUME_ORDER. */
+  readonly volumeOrder?: number;
+}
+
+/** Parameter names the model reads (docs/conventions.md, "Bispectrum"). */
+export const TREE_BISPECTRUM_PARAMETERS = ['b1', 'b2', 'bG2', 'f', 'bispShotPower', 'bispShotConst', 'alphaPar', 'alphaPerp', 'bispSigmaV'] as const;
+const LINEAR = ['b2', 'bG2', 'bispShotPower', 'bispShotConst'] as const;
+/** Parameters whose change means new templates (the geometry of the integrand). */
+const NON_POLYNOMIAL = ['alphaPar', 'alphaPerp', 'bispSigmaV'] as const;
+
+export function parseBinAveraging(name: string, where = 'averaging'): BinAveragingMethod {
+  const hit = BIN_AVERAGING_METHODS.find((m) => m === name);
+  if (!hit) throw new InputError(`${where}: unknown bin averaging "${name}" (known: ${BIN_AVERAGING_METHODS.join(', ')})`);
+  return hit;
+}
+
+/**
+ * The tree-level redshift-space galaxy bispectrum multipoles on triangle bins as
+ * a StatisticModel. Building it fixes the geometry (bin nodes, orientation
+ * nodes); templates are computed for the current alphaPar, alphaPerp and
+ * bispSigmaV and reused while those stay the same, so evaluating for new b1,
+ * b2, bG2, f and stochastic amplitudes is a dot product per bin.
+ */
+export class TreeBispectrumModel implements StatisticModel {
+  readonly entries: readonly DataVectorEntry[];
+  readonly parameterNames: readonly string[] = TREE_BISPECTRUM_PARAMETERS;
+  readonly linearParameterNames: readonly string[] = LINEAR;
+  readonly defaults: ParameterValues;
+  readonly multipoles: readonly number[];
+  readonly nodes: TriangleNodeSet;
+  private readonly options: TreeBispectrumModelOptions;
+  private readonly userRule: OrientationRule | undefined;
+  private cacheKey = '';
+  private cachedTemplates: Float64Array | undefined;
+
+  constructor(options: TreeBispectrumModelOptions) {
+    const settings = resolveTreeSettings(options);
+    this.options = options;
+    this.multipoles = options.multipoles ?? [0, 2];
+    checkMultipoles(this.multipoles);
+    if ((options.bins === undefined) === (options.triangles === undefined)) {
+      throw new InputError('bispectrum model: give exactly one of bins and triangles');
+    }
+    const labels: number[][] = [];
+    if (options.triangles !== undefined) {
+      this.nodes = userTriangleNodes(options.triangles);
+      options.triangles.forEach((t) => labels.push([...t]));
+    } else {
+      const bins = options.bins as TriangleBins;
+      const method = parseBinAveraging(options.averaging ?? 'continuous');
+      const order = options.volumeOrder ?? DEFAULT_VOLUME_ORDER;
+      this.nodes =
+        method === 'centres' ? centreTriangleNodes(bins) : method === 'effective' ? effectiveTriangleNodes(bins, order) : continuousBinNodes(bins, order);
+      for (let b = 0; b < bins.size; b++) labels.push(Array.from(bins.centres.subarray(3 * b, 3 * b + 3)));
+    }
+    this.userRule = options.orientationNodes ? orientationRule(options.orientationNodes.mu, options.orientationNodes.phi) : undefined;
+    this.entries = this.multipoles.flatMap((l) => labels.map((k) => ({ block: `B${l}`, k })));
+    this.defaults = {
+      b1: 1,
+      b2: 0,
+      bG2: 0,
+      f: settings.spectrum.growthRateLargeScale,
+      bispShotPower: 1,
+      bispShotConst: 1,
+      alphaPar: settings.alphaPar,
+      alphaPerp: settings.alphaPerp,
+      bispSigmaV: settings.velocityDispersion,
+    };
+  }
+
+  /** Templates [bin][multipole][value] for the non-polynomial parameters in `params`. */
+  templates(params: ParameterValues = {}): Float64Array {
+    const [alphaPar, alphaPerp, sigma] = NON_POLYNOMIAL.map((n) => params[n] ?? this.defaults[n]);
+    const key = `${alphaPar}|${alphaPerp}|${sigma}`;
+    if (this.cachedTemplates && key === this.cacheKey) return this.cachedTemplates;
+    const settings = resolveTreeSettings({ ...this.options, alphaPar, alphaPerp, velocityDispersion: sigma });
+    const k = this.nodes;
+    let lo = Infinity;
+    let hi = 0;
+    for (const side of [k.k1, k.k2, k.k3]) for (const x of side) (lo = Math.min(lo, x)), (hi = Math.max(hi, x));
+    checkWavenumbersInTable(settings, lo, hi, 'bispectrum model');
+    const lMax = Math.max(...this.multipoles);
+    const rule =
+      this.userRule ??
+      (isOrientationPolynomial(settings)
+        ? exactPolynomialOrientationRule(lMax)
+        : orientationRule(Math.max(DEFAULT_ORIENTATION_NODES.mu, Math.ceil((9 + lMax) / 4)), DEFAULT_ORIENTATION_NODES.phi));
+    this.cachedTemplates = averageOverTriangleNodes(k, new TreeTemplateIntegrand(settings), this.multipoles, rule);
+    this.cacheKey = key;
+    return this.cachedTemplates;
+  }
+
+  evaluate(params: ParameterValues, out?: Float64Array): Float64Array {
+    return combineTreeTemplates(this.templates(params), this.multipoles.length, this.polynomialParameters(params), out);
+  }
+
+  linearPart(params: ParameterValues, linear: readonly string[]): LinearDecomposition {
+    for (const name of linear) {
+      if (!(LINEAR as readonly string[]).includes(name)) {
+        throw new InputError(`bispectrum model: "${name}" is not a linear parameter (linear: ${LINEAR.join(', ')})`);
+      }
+    }
+    const zeroed: Record<string, number> = { ...this.defaults, ...params };
+    for (const name of linear) zeroed[name] = 0;
+    const offset = this.evaluate(zeroed);
+    const columns = linear.map((name) => {
+      const col = this.evaluate({ ...zeroed, [name]: 1 });
+      for (let i = 0; i < col.length; i++) col[i] -= offset[i];
+      return col;
+    });
+    return { names: [...linear], offset, columns };
+  }
+
+  private polynomialParameters(params: ParameterValues): TreeBispectrumParameters {
+    const v = (n: string) => {
+      const x = params[n] ?? this.defaults[n];
+      if (!Number.isFinite(x)) throw new InputError(`bispectrum model: parameter ${n} must be a finite number, got ${x}`);
+      return x;
+    };
+    return { b1: v('b1'), b2: v('b2'), bG2: v('bG2'), f: v('f'), bispShotPower: v('bispShotPower'), bispShotConst: v('bispShotConst') };
+  }
+}
