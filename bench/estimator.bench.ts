@@ -9,7 +9,7 @@ import { loadavg } from 'node:os';
 import { enumerateTriangleBins, shellGrid } from '../src/bispectrum/triangle-bins.js';
 import { fundamentalFrequency } from '../src/numerics/lattice-shell.js';
 import { RealFourier3d } from '../src/numerics/fft-3d.js';
-import { countTrianglesByFft, measureBispectrumMultipoles } from '../src/mocks/bispectrum-multipoles.js';
+import { triangleGeometryByFft, measureBispectrumMultipoles } from '../src/mocks/bispectrum-multipoles.js';
 import { gaussianFieldSpectrum } from '../src/mocks/gaussian-field.js';
 import { measurePowerMultipoles } from '../src/mocks/power-multipoles.js';
 import { binsNeedingShift } from '../src/mocks/triangle-sums.js';
@@ -43,7 +43,7 @@ const bench: Benchmark = {
     const gauss = gaussianFieldSpectrum(mesh, (k) => 2e4 * (k / 0.02) / (1 + (k / 0.02) ** 2) ** 1.2, 1);
     const powerSeconds = seconds(() => measurePowerMultipoles(gauss, mesh, shells));
     let counts: Float64Array = new Float64Array(0);
-    const countSeconds = seconds(() => (counts = countTrianglesByFft(mesh, bins)));
+    const countSeconds = seconds(() => (counts = triangleGeometryByFft(mesh, bins).counts));
     const bispectrumSeconds = seconds(() => measureBispectrumMultipoles(gauss, mesh, bins, { counts }));
     clearInterval(sampler);
     peak = Math.max(peak, memoryUsage.rss());

@@ -1,6 +1,7 @@
 import { InputError } from '../contracts/input-error.js';
 import type { TriangleBins } from '../bispectrum/triangle-bins.js';
 import { RealFourier3d } from '../numerics/fft-3d.js';
+import { fundamentalFrequency } from '../numerics/lattice-shell.js';
 import { checkMesh, meshVolume, type Mesh } from './mesh.js';
 import { shellFilteredField, type ShellWeighting } from './shell-filtered-field.js';
 import { shellModesOf, type ShellModes } from './shell-modes.js';
@@ -46,31 +47,68 @@ function shellFields(p: Prepared, source: Float64Array | null, weighting: ShellW
   return p.modes.map((m, s) => (wanted[s] ? shellFilteredField(p.fourier, m, source, weighting, shifted, p.work) : EMPTY));
 }
 
+/** Per-shell fields of one triangle sum: kinds of first-side fields, and the second and third sides. */
+interface SumJob {
+  readonly first: Float64Array[][];
+  readonly second: Float64Array[];
+  readonly third: Float64Array[];
+}
+
 /**
- * Plain sums over grid points for every bin, and for the bins that need it the
- * mean with the shifted sums (binsNeedingShift): one array per kind.
+ * sum_x A_i B_j C_l per bin for every job and kind (in that order), plain for
+ * every bin and, for the bins that need it, the mean with the shifted sums
+ * (binsNeedingShift). `jobs(shifted)` builds the per-shell fields of a pass.
  */
-function exactTriangleSums(p: Prepared, bins: TriangleBins, source: Float64Array | null): Float64Array[] {
-  const kinds = source === null ? 1 : 2;
-  const plain = Array.from({ length: kinds }, () => new Float64Array(bins.size));
-  const shifted = Array.from({ length: kinds }, () => new Float64Array(bins.size));
-  for (const [pass, out] of [[false, plain], [true, shifted]] as const) {
+function exactTriangleSums(p: Prepared, bins: TriangleBins, jobs: (shifted: boolean) => SumJob[]): Float64Array[] {
+  let plain: Float64Array[] = [];
+  let shifted: Float64Array[] = [];
+  for (const pass of [false, true]) {
     if (pass && !p.shifted.some((v) => v === 1)) continue;
-    const unit = shellFields(p, source, 'unit', pass);
-    const first = source === null ? [unit] : [unit, shellFields(p, source, 'legendre2', pass)];
-    accumulateTriangleSums(bins, first, unit, out, pass ? p.shifted : undefined);
+    const out: Float64Array[] = [];
+    for (const job of jobs(pass)) {
+      const sums = job.first.map(() => new Float64Array(bins.size));
+      accumulateTriangleSums(bins, job.first, job.second, job.third, sums, pass ? p.shifted : undefined);
+      out.push(...sums);
+    }
+    if (pass) shifted = out;
+    else plain = out;
   }
   return plain.map((sums, t) => sums.map((v, b) => (p.shifted[b] ? 0.5 * (v + shifted[t][b]) : v)));
 }
 
+/** Triangle counts of the bins and the mean |k| of each side over the triangles. */
+export interface TriangleGeometry {
+  /** Closed ordered triples k1 + k2 + k3 = 0 with k1, k2, k3 in shells i, j, l. */
+  readonly counts: Float64Array;
+  /** Mean |k1|, |k2|, |k3| over those triangles, 3 per bin (NaN without triangles), h/Mpc. */
+  readonly effective: Float64Array;
+}
+
 /**
- * Number of closed triangles per bin from FFTs of the shell indicators:
- * N_123 = n^6 sum_x I_i(x) I_j(x) I_l(x) (docs/conventions.md, "Mocks").
+ * Triangle counts and effective wavenumbers from FFTs of the shell indicators
+ * I and of the |k|-weighted shells K: N_123 = n^6 sum_x I_i I_j I_l and
+ * <|k1|> = n^6 sum_x K_i I_j I_l / N_123, likewise for k2, k3
+ * (docs/conventions.md, "Mocks").
  */
-export function countTrianglesByFft(mesh: Mesh, bins: TriangleBins): Float64Array {
-  const [sums] = exactTriangleSums(prepare(mesh, bins), bins, null);
+export function triangleGeometryByFft(mesh: Mesh, bins: TriangleBins): TriangleGeometry {
+  const p = prepare(mesh, bins);
+  const [sums, k1, k2, k3] = exactTriangleSums(p, bins, (shifted) => {
+    const unit = shellFields(p, null, 'unit', shifted);
+    const norm = shellFields(p, null, 'norm', shifted);
+    return [
+      { first: [unit, norm], second: unit, third: unit },
+      { first: [unit], second: norm, third: unit },
+      { first: [unit], second: unit, third: norm },
+    ];
+  });
   const scale = mesh.n ** 6;
-  return sums.map((v) => Math.round(v * scale));
+  const counts = sums.map((v) => Math.round(v * scale));
+  const effective = new Float64Array(3 * bins.size);
+  const kf = fundamentalFrequency(mesh.boxSize);
+  [k1, k2, k3].forEach((ks, a) => {
+    for (let b = 0; b < bins.size; b++) effective[3 * b + a] = counts[b] > 0 ? (kf * ks[b] * scale) / counts[b] : Number.NaN;
+  });
+  return { counts, effective };
 }
 
 /**
@@ -79,7 +117,7 @@ export function countTrianglesByFft(mesh: Mesh, bins: TriangleBins): Float64Arra
  *   B_L(bin) = (2L + 1) (V^2 / n^3) sum_x D^(L)_i(x) D_j(x) D_l(x) / N_123,
  * with D the shell-filtered fields of the discrete transform F of the field
  * and D^(2) carrying L_2(mu) on the first side. `counts` (from
- * countTrianglesByFft for the same mesh and bins) skips the counting FFTs.
+ * triangleGeometryByFft for the same mesh and bins) skips the counting FFTs.
  */
 export function measureBispectrumMultipoles(
   spectrum: Float64Array,
@@ -87,7 +125,7 @@ export function measureBispectrumMultipoles(
   bins: TriangleBins,
   options: { counts?: Float64Array } = {},
 ): MeasuredBispectrum {
-  const counts = options.counts ?? countTrianglesByFft(mesh, bins);
+  const counts = options.counts ?? triangleGeometryByFft(mesh, bins).counts;
   if (counts.length !== bins.size) {
     throw new InputError(`bispectrum: ${counts.length} triangle counts given for ${bins.size} triangle bins`);
   }
@@ -95,7 +133,10 @@ export function measureBispectrumMultipoles(
   if (spectrum.length !== p.fourier.spectrumLength) {
     throw new InputError(`bispectrum: the spectrum has ${spectrum.length} values, a ${mesh.n}^3 mesh needs ${p.fourier.spectrumLength}`);
   }
-  const [s0, s2] = exactTriangleSums(p, bins, spectrum);
+  const [s0, s2] = exactTriangleSums(p, bins, (shifted) => {
+    const unit = shellFields(p, spectrum, 'unit', shifted);
+    return [{ first: [unit, shellFields(p, spectrum, 'legendre2', shifted)], second: unit, third: unit }];
+  });
   const scale = meshVolume(mesh) ** 2 / mesh.n ** 3;
   const b0 = new Float64Array(bins.size);
   const b2 = new Float64Array(bins.size);

@@ -2,15 +2,15 @@ import { legendre } from '../numerics/legendre.js';
 import type { RealFourier3d } from '../numerics/fft-3d.js';
 import type { ShellModes } from './shell-modes.js';
 
-/** What multiplies each mode of a shell-filtered field. */
-export type ShellWeighting = 'unit' | 'legendre2';
+/** What multiplies each mode of a shell-filtered field: 1, L_2(mu_k) or |k| / k_f. */
+export type ShellWeighting = 'unit' | 'legendre2' | 'norm';
 
 /**
  * Real-space field of the modes of one k shell:
  *   X(x) = n^-3 sum_{k in shell} w(k) S(k) exp(i k.(x + h))
  * with S the half-complex `source` spectrum (or S = 1 when `source` is null,
- * which gives the shell indicator used for counting triangles), w = 1 or
- * L_2(mu_k), and h = 0 or the body-centre offset of a cell (a half cell along
+ * which gives the shell indicator used for counting triangles), w = 1,
+ * L_2(mu_k) or |k|/k_f, and h = 0 or the body-centre offset of a cell (a half cell along
  * each axis) when `shifted` (see docs/conventions.md, "Mocks": the shifted copy
  * cancels wrap-around triangles of the FFT sums).
  */
@@ -28,7 +28,7 @@ export function shellFilteredField(
   const phaseStep = Math.PI / fourier.n;
   for (let e = 0; e < modes.index.length; e++) {
     const c = 2 * modes.index[e];
-    const w = weighting === 'unit' ? 1 : legendre(2, modes.mu[e]);
+    const w = weighting === 'unit' ? 1 : weighting === 'norm' ? modes.norm[e] : legendre(2, modes.mu[e]);
     let re = source === null ? w : w * source[c];
     let im = source === null ? 0 : w * source[c + 1];
     if (shifted) {

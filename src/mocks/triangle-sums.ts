@@ -38,16 +38,17 @@ export function binsNeedingShift(mesh: Mesh, bins: TriangleBins): Uint8Array {
 const BLOCK = 2048;
 
 /**
- * Adds sum_x first[t][i](x) pair[j](x) pair[l](x) to out[t][b] for every
+ * Adds sum_x first[t][i](x) second[j](x) third[l](x) to out[t][b] for every
  * triangle bin b = (i, j, l) selected by `include` (all when omitted) and every
- * kind t. The grid is walked in blocks; within a block the product of the pair
- * fields is formed once per (j, l) and reused for every i. Fields of shells no
- * selected bin uses may be empty arrays.
+ * kind t. The grid is walked in blocks; within a block the product of the
+ * second and third fields is formed once per (j, l) and reused for every i.
+ * Fields of shells no selected bin uses may be empty arrays.
  */
 export function accumulateTriangleSums(
   bins: TriangleBins,
   first: readonly (readonly Float64Array[])[],
-  pair: readonly Float64Array[],
+  second: readonly Float64Array[],
+  third: readonly Float64Array[],
   out: readonly Float64Array[],
   include?: Uint8Array,
 ): void {
@@ -61,15 +62,15 @@ export function accumulateTriangleSums(
     if (list === undefined) groups.set(key, [b]);
     else list.push(b);
   }
-  const size = Math.max(...pair.map((p) => p.length));
+  const size = Math.max(...second.map((p) => p.length));
   const product = new Float64Array(BLOCK);
   const pairSums = new Float64Array(2);
   for (let start = 0; start < size; start += BLOCK) {
     const end = Math.min(size, start + BLOCK);
     const len = end - start;
     for (const [key, list] of groups) {
-      const pj = pair[Math.floor(key / s)];
-      const pl = pair[key % s];
+      const pj = second[Math.floor(key / s)];
+      const pl = third[key % s];
       for (let x = 0; x < len; x++) product[x] = pj[start + x] * pl[start + x];
       for (const b of list) {
         const i = bins.indices[3 * b];

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { enumerateTriangleBins, shellGrid } from '../../src/bispectrum/triangle-bins.js';
 import { RealFourier3d } from '../../src/numerics/fft-3d.js';
 import { fundamentalFrequency } from '../../src/numerics/lattice-shell.js';
-import { countTrianglesByFft, measureBispectrumMultipoles } from '../../src/mocks/bispectrum-multipoles.js';
+import { triangleGeometryByFft, measureBispectrumMultipoles } from '../../src/mocks/bispectrum-multipoles.js';
 import { measurePowerMultipoles } from '../../src/mocks/power-multipoles.js';
 import { binsNeedingShift } from '../../src/mocks/triangle-sums.js';
 import { numpyMockFixture } from './numpy-fixture.js';
@@ -35,13 +35,14 @@ describe('FFT estimators against numpy brute force on a 16^3 field', () => {
     expect(flagged).toEqual(['211', '220', '221', '222']);
   });
 
-  it('triangle counts equal the brute-force enumeration', () => {
+  it('triangle counts and mean side lengths equal the brute-force enumeration', () => {
     const bins = enumerateTriangleBins(shells);
-    const counts = countTrianglesByFft(mesh, bins);
+    const { counts, effective } = triangleGeometryByFft(mesh, bins);
     expect(bins.size).toBe(fx.triangles.length);
     fx.triangles.forEach((ref, b) => {
       expect(Array.from(bins.indices.subarray(3 * b, 3 * b + 3))).toEqual(ref.bin);
       expect(counts[b]).toBe(ref.count);
+      for (let a = 0; a < 3; a++) expect(effective[3 * b + a] / ref.kEffective[a]).toBeCloseTo(1, 10);
     });
   });
 

@@ -12,7 +12,7 @@ export interface NumpyMockFixture {
     dkOverKf: number;
     values: number[];
     power: { centre: number; modes: number; meanK: number; P0: number; P2: number; P4: number }[];
-    triangles: { bin: [number, number, number]; count: number; B0: number; B2: number }[];
+    triangles: { bin: [number, number, number]; count: number; kEffective: number[]; B0: number; B2: number }[];
   };
 }
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { enumerateTriangleBins, shellGrid } from '../../src/bispectrum/triangle-bins.js';
 import { latticeTriangleCounts } from '../../src/bispectrum/lattice/lattice-bin-average.js';
 import { fundamentalFrequency } from '../../src/numerics/lattice-shell.js';
-import { countTrianglesByFft } from '../../src/mocks/bispectrum-multipoles.js';
+import { triangleGeometryByFft } from '../../src/mocks/bispectrum-multipoles.js';
 import { binsNeedingShift } from '../../src/mocks/triangle-sums.js';
 
 describe('FFT triangle counts against the exact lattice enumeration (src/bispectrum/lattice)', () => {
@@ -11,7 +11,7 @@ describe('FFT triangle counts against the exact lattice enumeration (src/bispect
     const kf = fundamentalFrequency(mesh.boxSize);
     const bins = enumerateTriangleBins(shellGrid(1.5 * kf, 13.5 * kf, 1.5 * kf));
     expect(binsNeedingShift(mesh, bins).reduce((a, v) => a + v, 0)).toBeGreaterThan(5);
-    const fft = countTrianglesByFft(mesh, bins);
+    const fft = triangleGeometryByFft(mesh, bins).counts;
     const exact = latticeTriangleCounts(bins, mesh.boxSize);
     expect(Array.from(fft)).toEqual(Array.from(exact));
   });
