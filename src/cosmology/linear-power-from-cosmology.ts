@@ -219,25 +219,21 @@ export class CosmologyLinearPower implements LinearSpectrum {
 
   /** Growth rate f(k) of the cold field (EH99 growth differentiated in ln a). */
   growthRate(k: number): number {
-    const g = this.neutrinoGrowthAt(k);
-    return g ? this.growthRateLargeScale * g.coldRate : this.growthRateLargeScale;
+    return this.growthRateLargeScale * (this.neutrinoGrowthAt(k)?.coldRate ?? 1);
   }
 
   /** Growth rate f(k) of the total matter. */
   growthRateMatter(k: number): number {
-    const g = this.neutrinoGrowthAt(k);
-    return g ? this.growthRateLargeScale * g.totalRate : this.growthRateLargeScale;
+    return this.growthRateLargeScale * (this.neutrinoGrowthAt(k)?.totalRate ?? 1);
   }
 
   /** Scale-dependent growth factors D_cb(k, z) and D_m(k, z) (-> D(z) as k -> 0). */
   growthFactorCold(k: number): number {
-    const g = this.neutrinoGrowthAt(k);
-    return g ? this.growthFactor * g.cold : this.growthFactor;
+    return this.growthFactor * (this.neutrinoGrowthAt(k)?.cold ?? 1);
   }
 
   growthFactorMatter(k: number): number {
-    const g = this.neutrinoGrowthAt(k);
-    return g ? this.growthFactor * g.total : this.growthFactor;
+    return this.growthFactor * (this.neutrinoGrowthAt(k)?.total ?? 1);
   }
 
   /** sigma(R) of the cold field at this redshift, R in Mpc/h. */

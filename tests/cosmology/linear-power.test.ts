@@ -104,3 +104,23 @@ describe('massive neutrinos (Eisenstein & Hu 1999)', () => {
     expect(lp.growthRateMatter(50) / lp.growthRate(50)).toBeCloseTo(1, 6);
   });
 });
+
+describe('scale-dependent growth with massive neutrinos', () => {
+  const p = validateCosmology({ ...planck, mNu: 0.15 });
+  const z0 = linearPowerFromCosmology(p, 0);
+  const z1 = linearPowerFromCosmology(p, 1);
+  it('P_cb and P_m evolve with the EH99 growth of the cold and total fields', () => {
+    for (const k of [1e-3, 0.05, 0.5, 3]) {
+      expect(z1.power(k) / z0.power(k)).toBeCloseTo((z1.growthFactorCold(k) / z0.growthFactorCold(k)) ** 2, 6);
+      expect(z1.powerMatter(k) / z0.powerMatter(k)).toBeCloseTo((z1.growthFactorMatter(k) / z0.growthFactorMatter(k)) ** 2, 6);
+    }
+  });
+  it('f(k) is the logarithmic derivative of D_cb(k, a): finite difference in a at k = 0.5 h/Mpc to 1e-4', () => {
+    const dz = 1e-3;
+    const lo = linearPowerFromCosmology(p, 1 - dz);
+    const hi = linearPowerFromCosmology(p, 1 + dz);
+    const dlnD = Math.log(lo.growthFactorCold(0.5) / hi.growthFactorCold(0.5));
+    const dlna = Math.log((2 + dz) / (2 - dz));
+    expect(Math.abs(dlnD / dlna / z1.growthRate(0.5) - 1)).toBeLessThan(1e-4);
+  });
+});
