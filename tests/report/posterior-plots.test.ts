@@ -1,23 +1,11 @@
 import { describe, expect, it } from 'vitest';
+import { insideLoops } from './point-in-loops.js';
 import { InputError } from '../../src/contracts/input-error.js';
 import { Random } from '../../src/numerics/random.js';
 import { renderCornerPlotSvg } from '../../src/report/plots/corner-plot.js';
 import { renderFisherEllipsePlotSvg } from '../../src/report/plots/fisher-ellipse-plot.js';
 import { renderTracePlotSvg } from '../../src/report/plots/trace-plot.js';
 import { axisFromTicks, drawnElements, pathPoints, xTicks, yTicks } from './svg-reading.js';
-
-/** Even-odd point-in-polygon over several loops (independent of the contouring code). */
-function inside(px: number, py: number, loops: ReadonlyArray<ReadonlyArray<readonly [number, number]>>): boolean {
-  let odd = false;
-  for (const loop of loops) {
-    for (let i = 0, j = loop.length - 1; i < loop.length; j = i++) {
-      const [xi, yi] = loop[i];
-      const [xj, yj] = loop[j];
-      if (yi > py !== yj > py && px < ((xj - xi) * (py - yi)) / (yj - yi) + xi) odd = !odd;
-    }
-  }
-  return odd;
-}
 
 function gaussianPairs(n: number, seed: number): [Float64Array, Float64Array] {
   const r = new Random(seed);
@@ -53,7 +41,7 @@ describe('posterior plots', () => {
     ] as const) {
       const loops = pathPoints(element?.d ?? '').map((loop) => loop.map(([px, py]): [number, number] => [xAxis.toValue(px), yAxis.toValue(py)]));
       let count = 0;
-      for (let i = 0; i < x.length; i++) if (inside(x[i], y[i], loops)) count++;
+      for (let i = 0; i < x.length; i++) if (insideLoops(x[i], y[i], loops)) count++;
       expect(count / x.length).toBeGreaterThan(fraction - 0.025);
       expect(count / x.length).toBeLessThan(fraction + 0.025);
     }

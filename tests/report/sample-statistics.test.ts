@@ -1,23 +1,11 @@
 import { describe, expect, it } from 'vitest';
+import { insideLoops } from './point-in-loops.js';
 import { Random } from '../../src/numerics/random.js';
 import { credibleContours } from '../../src/report/stats/credible-contours.js';
 import { covarianceEllipse, deltaChiSquareTwoDof } from '../../src/report/stats/covariance-ellipse.js';
 import { densityHistogram } from '../../src/report/stats/density-histogram.js';
 import { massLevels } from '../../src/report/stats/mass-levels.js';
 import { InputError } from '../../src/contracts/input-error.js';
-
-/** Even-odd point-in-polygon test over all loops (written here independently of the code under test). */
-function insideLoops(px: number, py: number, loops: ReadonlyArray<ReadonlyArray<readonly [number, number]>>): boolean {
-  let inside = false;
-  for (const loop of loops) {
-    for (let i = 0, j = loop.length - 1; i < loop.length; j = i++) {
-      const [xi, yi] = loop[i];
-      const [xj, yj] = loop[j];
-      if (yi > py !== yj > py && px < ((xj - xi) * (py - yi)) / (yj - yi) + xi) inside = !inside;
-    }
-  }
-  return inside;
-}
 
 function correlatedGaussian(n: number, seed: number, rho: number): { x: Float64Array; y: Float64Array } {
   const r = new Random(seed);

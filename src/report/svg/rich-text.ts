@@ -46,7 +46,7 @@ export function richTextToSvg(markup: string): string {
   let offset = 0; // current baseline shift in em
   for (const seg of parseRichText(markup)) {
     const target = seg.shift === 'sub' ? 0.3 : seg.shift === 'sup' ? -0.4 : 0;
-    const dy = target - offset;
+    const dy = Number((target - offset).toFixed(2));
     offset = target;
     const size = seg.shift === 'none' ? '' : ' font-size="75%"';
     out += dy === 0 && size === '' ? escapeMarkup(seg.text) : `<tspan dy="${dy}em"${size}>${escapeMarkup(seg.text)}</tspan>`;
