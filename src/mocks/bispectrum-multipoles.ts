@@ -12,6 +12,8 @@ export interface MeasuredBispectrum {
   readonly bins: TriangleBins;
   /** Closed triangles k1 + k2 + k3 = 0 with k1, k2, k3 in shells i, j, l (ordered triples). */
   readonly counts: Float64Array;
+  /** Mean |k1|, |k2|, |k3| over those triangles, 3 per bin. */
+  readonly effective: Float64Array;
   /** B_0 and B_2 (Legendre weight on k1, the side from shell i) in (Mpc/h)^6; NaN where counts = 0. */
   readonly b0: Float64Array;
   readonly b2: Float64Array;
@@ -116,16 +118,16 @@ export function triangleGeometryByFft(mesh: Mesh, bins: TriangleBins): TriangleG
  * PRD 70 (2004) 083007 and PRD 92 (2015) 083532, from memory):
  *   B_L(bin) = (2L + 1) (V^2 / n^3) sum_x D^(L)_i(x) D_j(x) D_l(x) / N_123,
  * with D the shell-filtered fields of the discrete transform F of the field
- * and D^(2) carrying L_2(mu) on the first side. `counts` (from
+ * and D^(2) carrying L_2(mu) on the first side. `geometry` (from
  * triangleGeometryByFft for the same mesh and bins) skips the counting FFTs.
  */
 export function measureBispectrumMultipoles(
   spectrum: Float64Array,
   mesh: Mesh,
   bins: TriangleBins,
-  options: { counts?: Float64Array } = {},
+  options: { geometry?: TriangleGeometry } = {},
 ): MeasuredBispectrum {
-  const counts = options.counts ?? triangleGeometryByFft(mesh, bins).counts;
+  const { counts, effective } = options.geometry ?? triangleGeometryByFft(mesh, bins);
   if (counts.length !== bins.size) {
     throw new InputError(`bispectrum: ${counts.length} triangle counts given for ${bins.size} triangle bins`);
   }
@@ -144,5 +146,5 @@ export function measureBispectrumMultipoles(
     b0[b] = counts[b] > 0 ? (scale * s0[b]) / counts[b] : Number.NaN;
     b2[b] = counts[b] > 0 ? (5 * scale * s2[b]) / counts[b] : Number.NaN;
   }
-  return { bins, counts, b0, b2 };
+  return { bins, counts, effective, b0, b2 };
 }

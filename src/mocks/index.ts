@@ -9,3 +9,4 @@ export * from './gaussian-field.js';
 export * from './linear-galaxy-field.js';
 export * from './second-order-field.js';
 export * from './stochastic-field.js';
+export * from './box-measurement.js';

@@ -73,7 +73,7 @@ describe('Gaussian random fields', () => {
     const spec = gaussianFieldSpectrum(mesh, power, 7);
     const p = measurePowerMultipoles(spec, mesh, bins.shells);
     const g = measureBispectrumMultipoles(spec, mesh, bins);
-    const nl = measureBispectrumMultipoles(secondOrderGalaxySpectrum(spec, mesh, { b1: 1, b2: 2, bG2: 0, f: 0 }), mesh, bins, { counts: g.counts });
+    const nl = measureBispectrumMultipoles(secondOrderGalaxySpectrum(spec, mesh, { b1: 1, b2: 2, bG2: 0, f: 0 }), mesh, bins, { geometry: g });
     // Gaussian variance V s123 P1 P2 P3 / N_tri (Sefusatti et al. 2006, PRD 74, 023522,
     // in the (2 pi)^3 delta_D convention of docs/conventions.md).
     let chi2 = 0;
