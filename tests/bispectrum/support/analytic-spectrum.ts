@@ -9,7 +9,7 @@ import type { LinearSpectrum } from '../../../src/contracts/linear-spectrum.js';
 export function analyticSpectrum(options: { wiggle?: number; f?: number; kMin?: number; kMax?: number } = {}): LinearSpectrum {
   const a = options.wiggle ?? 0.05;
   const f = options.f ?? 0.75;
-  const nw = (k: number) => (2.0e4 * k) / (1 + (k / 0.02) ** 2) ** 1.4;
+  const nw = (k: number) => (2.6e6 * k) / (1 + (k / 0.02) ** 2) ** 1.4;
   return {
     redshift: 0.5,
     kMin: options.kMin ?? 1e-4,
