@@ -63,7 +63,7 @@ export function writeJsonAtomically(path: string, value: unknown): void {
   renameSync(tmp, path);
 }
 
-export function readJson<T>(path: string, field: string): T {
+export function readRunJson<T>(path: string, field: string): T {
   try {
     return JSON.parse(readFileSync(path, 'utf8')) as T;
   } catch (err) {

@@ -4,12 +4,12 @@ import { InputError } from '../../contracts/input-error.js';
 import { Random } from '../../numerics/random.js';
 import { WorkerCrashError, type BatchEvaluator } from './batch-evaluator.js';
 import { ChainHistory } from './chain-history.js';
-import { appendDurably, chainCsvHeader, chainCsvRows, chainFilePaths, readChainCsv, readJson, writeJsonAtomically } from './chain-files.js';
+import { appendDurably, chainCsvHeader, chainCsvRows, chainFilePaths, readChainCsv, readRunJson, writeJsonAtomically } from './chain-files.js';
 import { acceptanceSummary } from './draw-summary.js';
 import { emptyFailureCounts, LikelihoodFailureError, tallyFailures, type FailureCounts } from './failure-tally.js';
 import { openEvaluator } from './open-evaluator.js';
 import { ProgressDisplay } from './progress-display.js';
-import { drawStartingPoint, withinBounds } from './sampled-parameter.js';
+import { drawStartingPoint, withinParameterBounds } from './sampled-parameter.js';
 import type { ProposalEvaluator, SamplerKernel } from './sampler-kernel.js';
 import { SamplingHaltedError } from './sampling-halted-error.js';
 import type { RunDiagnostics, SamplingMethod } from './sampling-method.js';
@@ -76,7 +76,7 @@ export async function runSampling(method: SamplingMethod, s: ValidatedRunSetting
   let converged = false;
   let chainBytes: number;
   if (resuming) {
-    const cp = readJson<SamplingCheckpoint>(paths.state, 'output');
+    const cp = readRunJson<SamplingCheckpoint>(paths.state, 'output');
     if (cp.format !== 'treble-sampling-state') throw new InputError(`output: ${paths.state} is not a treble sampling checkpoint`);
     for (const key of new Set([...Object.keys(fingerprint), ...Object.keys(cp.fingerprint)])) {
       if (JSON.stringify(fingerprint[key]) !== JSON.stringify(cp.fingerprint[key])) {
@@ -102,7 +102,7 @@ export async function runSampling(method: SamplingMethod, s: ValidatedRunSetting
     const n = points.length / dim;
     const values = new Float64Array(n).fill(-Infinity);
     const inside: number[] = [];
-    for (let i = 0; i < n; i++) if (withinBounds(s.parameters, points, i * dim)) inside.push(i);
+    for (let i = 0; i < n; i++) if (withinParameterBounds(s.parameters, points, i * dim)) inside.push(i);
     if (inside.length > 0) {
       const packed = new Float64Array(inside.length * dim);
       inside.forEach((i, j) => packed.set(points.subarray(i * dim, (i + 1) * dim), j * dim));

@@ -24,7 +24,7 @@ export interface BoundedParameter {
   readonly scale: number | null;
 }
 
-export function validateParameters(parameters: readonly SampledParameter[], field = 'parameters'): BoundedParameter[] {
+export function validateSampledParameters(parameters: readonly SampledParameter[], field = 'parameters'): BoundedParameter[] {
   if (!Array.isArray(parameters) || parameters.length === 0) throw new InputError(`${field} must be a non-empty list`);
   const seen = new Set<string>();
   return parameters.map((p, i) => {
@@ -53,7 +53,7 @@ export function validateParameters(parameters: readonly SampledParameter[], fiel
 }
 
 /** True when theta lies within all bounds. */
-export function withinBounds(parameters: readonly BoundedParameter[], theta: Float64Array, offset = 0): boolean {
+export function withinParameterBounds(parameters: readonly BoundedParameter[], theta: Float64Array, offset = 0): boolean {
   for (let i = 0; i < parameters.length; i++) {
     const v = theta[offset + i];
     if (!(v >= parameters[i].lower && v <= parameters[i].upper)) return false;

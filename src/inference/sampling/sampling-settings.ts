@@ -1,7 +1,7 @@
 import { InputError } from '../../contracts/input-error.js';
 import { normalizeLogPosteriorReference, type LogPosteriorReference } from './log-posterior-reference.js';
 import type { ProgressMode } from './progress-display.js';
-import { validateParameters, type BoundedParameter, type SampledParameter } from './sampled-parameter.js';
+import { validateSampledParameters, type BoundedParameter, type SampledParameter } from './sampled-parameter.js';
 import { defaultWorkerCount } from './worker-pool.js';
 
 /** Settings shared by both samplers; every optional field has a documented default. */
@@ -92,7 +92,7 @@ export function validateRunSettings(s: SamplingRunSettings): ValidatedRunSetting
     throw new InputError('priors must be JSON-serialisable');
   }
   return {
-    parameters: validateParameters(s.parameters),
+    parameters: validateSampledParameters(s.parameters),
     target: normalizeLogPosteriorReference(s.target),
     output: s.output,
     seed: s.seed,

@@ -5,7 +5,9 @@ import { InputError } from '../../contracts/input-error.js';
 import { WorkerCrashError, type BatchEvaluator } from './batch-evaluator.js';
 import { nodeEndpoint } from './comlink-node.js';
 import type { EvaluatedBatch } from './evaluate-points.js';
+import type { ModeClimb } from '../optimize/climb-from-start.js';
 import type { LogPosteriorReference } from './log-posterior-reference.js';
+import type { BoundedParameter } from './sampled-parameter.js';
 import type { SamplingWorkerApi } from './worker-entry.js';
 import { samplingWorkerEntry } from './worker-entry-location.js';
 
@@ -83,14 +85,9 @@ export class WorkerPool implements BatchEvaluator {
 
   async evaluate(points: Float64Array, dim: number): Promise<EvaluatedBatch> {
     const count = points.length / dim;
-    const w = this.slots.length;
-    const parts: Promise<EvaluatedBatch>[] = [];
-    for (let i = 0; i < w; i++) {
-      const lo = Math.floor((i * count) / w);
-      const hi = Math.floor(((i + 1) * count) / w);
-      if (hi > lo) parts.push(this.evaluateOn(i, points.slice(lo * dim, hi * dim), dim));
-    }
-    const results = await Promise.all(parts);
+    const results = await Promise.all(
+      this.chunks(count).map(([lo, hi], i) => this.evaluateOn(i, points.slice(lo * dim, hi * dim), dim)),
+    );
     const values = new Float64Array(count);
     const status = new Uint8Array(count);
     let firstError: string | null = null;
@@ -102,6 +99,29 @@ export class WorkerPool implements BatchEvaluator {
       firstError ??= r.firstError;
     }
     return { values, status, firstError };
+  }
+
+  /** Contiguous index ranges [lo, hi), one per worker, sizes differing by at most one; empty ones left out. */
+  private chunks(count: number): [number, number][] {
+    const w = this.slots.length;
+    const out: [number, number][] = [];
+    for (let i = 0; i < w; i++) {
+      const lo = Math.floor((i * count) / w);
+      const hi = Math.floor(((i + 1) * count) / w);
+      if (hi > lo) out.push([lo, hi]);
+    }
+    return out;
+  }
+
+  /** Local maximisations from each start (count x dim), the starts shared out over the workers. */
+  async climb(starts: Float64Array, parameters: readonly BoundedParameter[]): Promise<ModeClimb[]> {
+    const dim = parameters.length;
+    const parts = await Promise.all(
+      this.chunks(starts.length / dim).map(([lo, hi], i) =>
+        Promise.race([this.slots[i].remote.climb(starts.slice(lo * dim, hi * dim), parameters), this.slots[i].death]),
+      ),
+    );
+    return parts.flat();
   }
 
   private async evaluateOn(index: number, chunk: Float64Array, dim: number): Promise<EvaluatedBatch> {
