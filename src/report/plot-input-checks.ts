@@ -27,3 +27,19 @@ export function requirePositiveValues(name: string, values: ArrayLike<number>): 
 export function requireNonEmptyList(name: string, list: readonly unknown[]): void {
   if (list.length === 0) throw new InputError(`${name} is empty`);
 }
+
+/**
+ * Several series that go with a reference series: each must have its length,
+ * then hold finite (or, where asked, positive) numbers.
+ */
+export function requireMatchingSeries(
+  reference: string,
+  length: number,
+  series: ReadonlyArray<readonly [name: string, values: ArrayLike<number>, rule: 'finite' | 'positive']>,
+): void {
+  for (const [name, values] of series) requireLength(name, values, length, reference);
+  for (const [name, values, rule] of series) {
+    if (rule === 'positive') requirePositiveValues(name, values);
+    else requireFiniteValues(name, values);
+  }
+}

@@ -1,5 +1,5 @@
 import { InputError } from '../../contracts/input-error.js';
-import { requireFiniteValues, requireLength, requirePositiveValues } from '../plot-input-checks.js';
+import { requireFiniteValues, requireLength, requireMatchingSeries } from '../plot-input-checks.js';
 import type { AxisKind } from '../svg/axis-scale.js';
 import { axisDomain } from '../svg/axis-domain.js';
 import { svgErrorBar } from '../svg/error-bar.js';
@@ -42,14 +42,13 @@ export function renderBispectrumPlotSvg(input: BispectrumPlotInput): string {
   const n = input.data.length;
   if (!Number.isInteger(input.ell) || input.ell < 0) throw new InputError(`bispectrum ell must be a whole number >= 0, got ${input.ell}`);
   requireFiniteValues('bispectrum data', input.data);
-  requireLength('bispectrum sigma', input.sigma, n, 'bispectrum data');
-  requireLength('bispectrum model', input.model, n, 'bispectrum data');
   requireLength('bispectrum shapeClass', input.shapeClass, n, 'bispectrum data');
-  requirePositiveValues('bispectrum sigma', input.sigma);
-  requireFiniteValues('bispectrum model', input.model);
   const index = input.index ?? Float64Array.from({ length: n }, (_, i) => i);
-  requireLength('bispectrum index', index, n, 'bispectrum data');
-  requireFiniteValues('bispectrum index', index);
+  requireMatchingSeries('bispectrum data', n, [
+    ['bispectrum sigma', input.sigma, 'positive'],
+    ['bispectrum model', input.model, 'finite'],
+    ['bispectrum index', index, 'finite'],
+  ]);
   const styles = input.shapeClass.map((c, i) => shapeClassStyle(c, `bispectrum shapeClass[${i}]`));
 
   const width = input.width ?? 720;

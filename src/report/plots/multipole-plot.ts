@@ -1,5 +1,5 @@
 import { InputError } from '../../contracts/input-error.js';
-import { requireFiniteValues, requireLength, requireNonEmptyList, requirePositiveValues } from '../plot-input-checks.js';
+import { requireFiniteValues, requireMatchingSeries, requireNonEmptyList } from '../plot-input-checks.js';
 import { axisDomain } from '../svg/axis-domain.js';
 import { svgErrorBar } from '../svg/error-bar.js';
 import { renderLegendRow, type LegendEntry } from '../svg/legend.js';
@@ -79,11 +79,10 @@ export function renderMultipolePlotSvg(input: MultipolePlotInput): string {
 function checkedSeries(m: MultipoleSeries, name: string): MultipoleSeries {
   if (!Number.isInteger(m.ell) || m.ell < 0) throw new InputError(`${name}.ell must be a whole number >= 0, got ${m.ell}`);
   requireFiniteValues(`${name}.k`, m.k);
-  requireLength(`${name}.data`, m.data, m.k.length, `${name}.k`);
-  requireLength(`${name}.sigma`, m.sigma, m.k.length, `${name}.k`);
-  requireLength(`${name}.model`, m.model, m.k.length, `${name}.k`);
-  requireFiniteValues(`${name}.data`, m.data);
-  requirePositiveValues(`${name}.sigma`, m.sigma);
-  requireFiniteValues(`${name}.model`, m.model);
+  requireMatchingSeries(`${name}.k`, m.k.length, [
+    [`${name}.data`, m.data, 'finite'],
+    [`${name}.sigma`, m.sigma, 'positive'],
+    [`${name}.model`, m.model, 'finite'],
+  ]);
   return m;
 }

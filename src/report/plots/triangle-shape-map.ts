@@ -1,5 +1,5 @@
 import { InputError } from '../../contracts/input-error.js';
-import { requireFiniteValues, requireLength, requirePositiveValues } from '../plot-input-checks.js';
+import { requireFiniteValues, requireMatchingSeries } from '../plot-input-checks.js';
 import { renderDivergingColourBar } from '../svg/colour-bar.js';
 import { divergingColour } from '../svg/diverging-colour.js';
 import { MUTED_INK } from '../svg/palette.js';
@@ -32,12 +32,11 @@ export interface TriangleShapeMapInput {
 export function renderTriangleShapeMapSvg(input: TriangleShapeMapInput): string {
   const n = input.value.length;
   requireFiniteValues('shape map value', input.value);
-  requireLength('shape map k1', input.k1, n, 'shape map value');
-  requireLength('shape map k2', input.k2, n, 'shape map value');
-  requireLength('shape map k3', input.k3, n, 'shape map value');
-  requirePositiveValues('shape map k1', input.k1);
-  requirePositiveValues('shape map k2', input.k2);
-  requirePositiveValues('shape map k3', input.k3);
+  requireMatchingSeries('shape map value', n, [
+    ['shape map k1', input.k1, 'positive'],
+    ['shape map k2', input.k2, 'positive'],
+    ['shape map k3', input.k3, 'positive'],
+  ]);
   const shapes = Array.from({ length: n }, (_, i) => {
     const [a, b, c] = [input.k1[i], input.k2[i], input.k3[i]].sort((p, q) => q - p);
     return { x: b / a, y: c / a, value: input.value[i] };
