@@ -6,6 +6,7 @@ export default defineConfig({
   entry: {
     index: 'src/index.ts',
     'cli/main': 'src/cli/main.ts',
+    'sampling-worker': 'src/inference/sampling/worker-entry.ts',
   },
   format: ['esm'],
   target: 'node20',
