@@ -17,7 +17,7 @@ const kf = fundamentalFrequency(mesh.boxSize);
 const grid = shellGrid(2 * kf, 6 * kf, kf);
 const bins = enumerateTriangleBins(grid);
 const P = 2500;
-const R = 500;
+const R = 300;
 
 describe('Gaussian covariance against Gaussian random fields', () => {
   const geometry = triangleGeometryByFft(mesh, bins);

@@ -19,7 +19,9 @@ import { hartlapFactor, percivalInflation, sampleCovariance } from './sample-cov
  *       reported), or the Sellentin–Heavens t-distribution likelihood (no Hartlap factor);
  *   { source: "gaussian", modeCounts?, triangleCounts?, crossPowerBispectrum? } — analytic, from the
  *       model at a fiducial point: Gaussian P_l x P_l', diagonal Gaussian B, P x B zero ("none",
- *       default) or its leading non-Gaussian term ("leading").
+ *       default) or its leading non-Gaussian term ("leading"); the Poisson noise 1/nbar is taken as
+ *       part of the model (its stochastic terms at their Poisson defaults: shotNoise "in-theory",
+ *       default) or added to a noise-free model (shotNoise "add").
  */
 export type CovarianceOptions =
   | { readonly source: 'matrix'; readonly file?: string }
@@ -29,6 +31,8 @@ export type CovarianceOptions =
       readonly modeCounts?: ModeCountSource;
       readonly triangleCounts?: TriangleCountSource;
       readonly crossPowerBispectrum?: 'none' | 'leading';
+      /** "in-theory" (default): the model's stochastic terms already hold the shot noise; "add": add 1/nbar. */
+      readonly shotNoise?: 'in-theory' | 'add';
     };
 
 /** How the likelihood must use the covariance. */
@@ -64,7 +68,7 @@ export function validateCovarianceOptions(o: unknown): CovarianceOptions {
   const problems: string[] = [];
   if (typeof o !== 'object' || o === null) throw new InputErrors(['covariance must be an object with a "source" key (matrix, mocks or gaussian)']);
   const v = o as Record<string, unknown>;
-  const allowed: Record<string, string[]> = { matrix: ['file'], mocks: ['treatment'], gaussian: ['modeCounts', 'triangleCounts', 'crossPowerBispectrum'] };
+  const allowed: Record<string, string[]> = { matrix: ['file'], mocks: ['treatment'], gaussian: ['modeCounts', 'triangleCounts', 'crossPowerBispectrum', 'shotNoise'] };
   const keys = allowed[String(v.source)];
   if (!keys) throw new InputErrors([`covariance.source must be matrix, mocks or gaussian, got ${JSON.stringify(v.source)}`]);
   for (const k of Object.keys(v)) if (k !== 'source' && !keys.includes(k)) problems.push(`covariance.${k} is not a key of source "${v.source}" (${keys.join(', ')})`);
@@ -77,6 +81,7 @@ export function validateCovarianceOptions(o: unknown): CovarianceOptions {
     oneOf('modeCounts', ['measured', 'continuous', 'lattice'], false);
     oneOf('triangleCounts', ['measured', 'bin-volume'], false);
     oneOf('crossPowerBispectrum', ['none', 'leading'], false);
+    oneOf('shotNoise', ['in-theory', 'add'], false);
   }
   if (problems.length) throw new InputErrors(problems);
   return v as unknown as CovarianceOptions;
@@ -113,7 +118,8 @@ function analyticGaussian(o: Extract<CovarianceOptions, { source: 'gaussian' }>,
   const n = entries.length;
   const modeCounts = o.modeCounts ?? 'measured';
   if (modeCounts === 'lattice' && metadata.boxSize === undefined) throw new InputError('covariance.modeCounts "lattice" needs a periodic box (boxSize in the bundle)', { where: 'covariance.modeCounts' });
-  const common = { entries, theory, shotNoise: 1 / metadata.numberDensity, volume: metadata.volume, boxSize: metadata.boxSize };
+  const shotNoise = o.shotNoise === 'add' ? 1 / metadata.numberDensity : 0;
+  const common = { entries, theory, shotNoise, volume: metadata.volume, boxSize: metadata.boxSize };
   const out = new Float64Array(n * n);
   if (bundle.power) addGaussianPowerCovariance({ ...common, dk: bundle.power.dk, modeCounts }, out);
   if (bundle.bispectrum) {
@@ -161,7 +167,7 @@ export function prepareCovariance(options: CovarianceOptions, ctx: CovarianceCon
       modeCounts: options.modeCounts ?? 'measured',
       triangleCounts: options.triangleCounts ?? 'measured',
       crossPowerBispectrum: options.crossPowerBispectrum ?? 'none',
-      shotNoise: 1 / bundle.metadata.numberDensity,
+      shotNoise: options.shotNoise === 'add' ? `add 1/nbar = ${1 / bundle.metadata.numberDensity}` : 'in the model',
       volume: bundle.metadata.volume,
     }),
   };

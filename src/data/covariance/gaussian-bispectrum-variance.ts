@@ -4,7 +4,7 @@ import { volumeFundamentalFrequency } from './mode-counts.js';
 /**
  * Diagonal Gaussian variance of the bispectrum multipoles with
  * <delta delta> = (2 pi)^3 delta_D P (docs/conventions.md):
- *   Var[B_l] = (2l+1) s123 V Ptot(k1) Ptot(k2) Ptot(k3) / N_tri,   Ptot = P_0 + 1/nbar,
+ *   Var[B_l] = (2l+1) s123 V Ptot(k1) Ptot(k2) Ptot(k3) / N_tri,   Ptot = P_0 (+ 1/nbar unless the model holds the noise),
  * equivalently s123 (2 pi)^3 k_f^3 Ptot^3 / V123 with N_tri = V123 / k_f^6
  * (Scoccimarro 2004, PRD 70, 083007; Sefusatti et al. 2006, PRD 74, 023522, written
  * there without the (2 pi)^3 of this convention). s123 = 6, 2, 1 for equilateral,
@@ -34,6 +34,7 @@ export interface BispectrumVarianceInputs {
   readonly entries: readonly MeasuredEntry[];
   /** Galaxy power monopole without shot noise at any k. */
   readonly monopoleAt: (k: number) => number;
+  /** Noise added to the model power: 1/nbar, or 0 when the model already holds it. */
   readonly shotNoise: number;
   readonly dk: number;
   readonly volume: number;

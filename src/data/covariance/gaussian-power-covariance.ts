@@ -5,7 +5,7 @@ import { shellModes, type ModeCountSource } from './mode-counts.js';
 /**
  * Gaussian covariance of the power multipoles, diagonal in k bins:
  *   Cov[P_l(k), P_l'(k)] = (2l+1)(2l'+1) (2 / N_k) < L_l(mu) L_l'(mu) Ptot(k, mu)^2 >_shell,
- *   Ptot(k, mu) = sum_a P_a(k) L_a(mu) + 1/nbar,
+ *   Ptot(k, mu) = sum_a P_a(k) L_a(mu) (+ 1/nbar unless the model holds the noise),
  * the shell average being (1/2) int dmu in the continuum (so that for l = l' = 0
  * and no anisotropy it is the familiar 2 Ptot^2 / N_k; common practice, e.g.
  * Grieb et al. 2016, MNRAS 457, 1577, in the thin-shell limit). P_a are the model
@@ -16,6 +16,7 @@ export interface PowerCovarianceInputs {
   readonly entries: readonly MeasuredEntry[];
   /** Model vector over all entries at the fiducial parameters. */
   readonly theory: Float64Array;
+  /** Noise added to the model power: 1/nbar, or 0 when the model already holds it. */
   readonly shotNoise: number;
   readonly dk: number;
   readonly volume: number;

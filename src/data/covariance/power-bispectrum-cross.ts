@@ -12,6 +12,7 @@ import { shellModes, type ModeCountSource } from './mode-counts.js';
 export interface CrossCovarianceInputs {
   readonly entries: readonly MeasuredEntry[];
   readonly theory: Float64Array;
+  /** Noise added to the model power: 1/nbar, or 0 when the model already holds it. */
   readonly shotNoise: number;
   readonly dk: number;
   readonly volume: number;
