@@ -37,7 +37,8 @@ describe('covariance choices', () => {
   const theory = Float64Array.from(bundle.dataVector.values);
 
   it('Gaussian: block-diagonal in k bins and triangles, P x B zero by default, the leading term on request', () => {
-    const o = validateCovarianceOptions({ source: 'gaussian', modeCounts: 'continuous', triangleCounts: 'bin-volume' });
+    const o = { source: 'gaussian', modeCounts: 'continuous', triangleCounts: 'bin-volume' } as const;
+    expect(validateCovarianceOptions(o)).toEqual(o);
     const c = prepareCovariance(o, { bundle, selection: all, theory, freeParameters: 3 });
     const n = c.size;
     expect(n).toBe(20);
