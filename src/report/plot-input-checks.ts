@@ -17,7 +17,7 @@ export function requireLength(name: string, values: ArrayLike<number> | readonly
   }
 }
 
-export function requirePositiveValues(name: string, values: ArrayLike<number>): void {
+function requirePositiveValues(name: string, values: ArrayLike<number>): void {
   requireFiniteValues(name, values);
   for (let i = 0; i < values.length; i++) {
     if (!(values[i] > 0)) throw new InputError(`${name}[${i}] is ${values[i]}, expected a positive number`);

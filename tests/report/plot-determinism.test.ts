@@ -16,11 +16,11 @@ import {
 describe('plot output', () => {
   it('is byte-identical for equal inputs built separately, and differs when the data differ', () => {
     const render = (seed: number): string[] => {
-      const chains = syntheticChains(3, 600, seed);
+      const chains = syntheticChains(3, 300, seed);
       const b = syntheticBispectrum(seed);
       return [
-        renderCornerPlotSvg(syntheticCornerInput(chains, 100)),
-        renderTracePlotSvg(syntheticTraceInput(chains, 100)),
+        renderCornerPlotSvg(syntheticCornerInput(chains, 50)),
+        renderTracePlotSvg(syntheticTraceInput(chains, 50)),
         renderMultipolePlotSvg(syntheticMultipoleInput(seed)),
         renderBispectrumPlotSvg(b.b0),
         renderTriangleShapeMapSvg(syntheticShapeMapInput(b)),

@@ -39,11 +39,12 @@ describe('the HTML report', () => {
   });
 
   it('is self-contained: inline CSS and SVG, no scripts, no outside addresses', () => {
-    const html = renderReportHtml(syntheticReportInput());
+    const input = syntheticReportInput();
+    const html = renderReportHtml(input);
     expect(html).not.toMatch(/<script|<link rel="stylesheet"|<img|@import|url\(/i);
     const addresses = [...html.matchAll(/(?:https?:)?\/\/[^\s"'<>]+/g)].map((m) => m[0]);
     expect(new Set(addresses)).toEqual(new Set(['http://www.w3.org/2000/svg']));
-    expect(html.match(/<svg /g)?.length).toBe(syntheticReportInput().figures.length);
+    expect(html.match(/<svg /g)?.length).toBe(input.figures.length);
   });
 
   it('gives byte-identical output for the same input', () => {

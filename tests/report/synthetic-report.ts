@@ -24,8 +24,8 @@ import {
 } from './synthetic-plot-inputs.js';
 
 export function syntheticReportInput(): ReportInput {
-  const burnIn = 400;
-  const chains = syntheticChains(4, 2400, 5);
+  const burnIn = 200;
+  const chains = syntheticChains(4, 1200, 5);
   const kept = chains.map((perChain) => perChain.map((c) => c.subarray(burnIn)));
   const parameters: ReportParameterRow[] = SYNTHETIC_PARAMETERS.map((p, i) => {
     const draws = poolDraws(kept[i]);

@@ -8,7 +8,7 @@ export interface TickSet {
   step: number;
 }
 
-export function niceStep(span: number, target: number): number {
+function niceStep(span: number, target: number): number {
   const raw = span / Math.max(1, target);
   const power = 10 ** Math.floor(Math.log10(raw));
   const mantissa = raw / power;

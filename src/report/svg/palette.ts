@@ -3,7 +3,7 @@
  * Okabe & Ito (2008, "Color Universal Design"), ordered so that neighbours
  * differ in lightness too; ink and grid greys are neutral.
  */
-export const SERIES_COLOURS: readonly string[] = [
+const SERIES_COLOURS: readonly string[] = [
   '#0072B2', // blue
   '#D55E00', // vermillion
   '#009E73', // bluish green

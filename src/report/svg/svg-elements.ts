@@ -9,7 +9,7 @@ import { richTextToSvg } from './rich-text.js';
  */
 export type SvgAttributes = Readonly<Record<string, string | number | undefined>>;
 
-export function attributes(attrs: SvgAttributes): string {
+function attributes(attrs: SvgAttributes): string {
   let out = '';
   for (const [name, value] of Object.entries(attrs)) {
     if (value === undefined) continue;
@@ -37,10 +37,6 @@ export function svgCircle(cx: number, cy: number, r: number, attrs: SvgAttribute
 /** Text from rich-text markup (escaped inside). */
 export function svgText(x: number, y: number, markup: string, attrs: SvgAttributes = {}): string {
   return element('text', { x, y, ...attrs }, richTextToSvg(markup));
-}
-
-export function svgGroup(content: string, attrs: SvgAttributes = {}): string {
-  return element('g', attrs, content);
 }
 
 /**
