@@ -1,6 +1,6 @@
 /**
  * Colours. Series colours are taken from the colour-blind-safe set of
- * Okabe & Ito (2008, "Color Universal Design"), ordered so that neighbours
+ * Okabe & Ito (2008, "Color Universal Design"; hex values from memory), ordered so that neighbours
  * differ in lightness too; ink and grid greys are neutral.
  */
 const SERIES_COLOURS: readonly string[] = [
