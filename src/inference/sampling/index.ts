@@ -15,3 +15,4 @@ export * from './chain-files.js';
 export * from './sidecar.js';
 export * from './progress-display.js';
 export * from './open-evaluator.js';
+export * from './sampling-checkpoint.js';

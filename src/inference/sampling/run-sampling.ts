@@ -4,33 +4,18 @@ import { InputError } from '../../contracts/input-error.js';
 import { Random } from '../../numerics/random.js';
 import { WorkerCrashError, type BatchEvaluator } from './batch-evaluator.js';
 import { ChainHistory } from './chain-history.js';
-import { appendDurably, chainCsvHeader, chainCsvRows, chainFilePaths, readChainCsv, readRunJson, writeJsonAtomically } from './chain-files.js';
+import { appendDurably, chainCsvHeader, chainCsvRows, chainFilePaths, readChainCsv, writeJsonAtomically } from './chain-files.js';
 import { acceptanceSummary } from './draw-summary.js';
 import { emptyFailureCounts, LikelihoodFailureError, tallyFailures, type FailureCounts } from './failure-tally.js';
 import { openEvaluator } from './open-evaluator.js';
 import { ProgressDisplay } from './progress-display.js';
 import { drawStartingPoint, withinParameterBounds } from './sampled-parameter.js';
 import type { ProposalEvaluator, SamplerKernel } from './sampler-kernel.js';
+import { readCheckpoint, runFingerprint, writeCheckpoint } from './sampling-checkpoint.js';
 import { SamplingHaltedError } from './sampling-halted-error.js';
 import type { RunDiagnostics, SamplingMethod } from './sampling-method.js';
 import type { ValidatedRunSettings } from './sampling-settings.js';
 import { buildSidecar, type RunStatus } from './sidecar.js';
-
-/** The checkpoint file's layout ("treble-sampling-state", version 1). */
-interface SamplingCheckpoint {
-  readonly format: 'treble-sampling-state';
-  readonly formatVersion: 1;
-  /** Byte length of the chain file that matches this state; resuming cuts the file back to it. */
-  readonly chainBytes: number;
-  readonly steps: number;
-  readonly converged: boolean;
-  readonly fingerprint: Record<string, unknown>;
-  readonly kernel: unknown;
-  readonly failures: FailureCounts;
-  readonly memo: unknown;
-  readonly note: string;
-  readonly expectedSteps: number | null;
-}
 
 export interface SamplingResult {
   readonly stopReason: Exclude<RunStatus, 'running' | 'halted'>;
@@ -47,11 +32,6 @@ export interface SamplingResult {
 
 const startingRounds = 100;
 
-/** Fingerprint of what fixes the chain: compared when resuming. */
-function fingerprintOf(s: ValidatedRunSettings, method: SamplingMethod): Record<string, unknown> {
-  return { ...method.fingerprint, seed: s.seed, parameters: s.parameters.map((p) => [p.name, p.lower, p.upper, p.start, p.scale].map(String)) };
-}
-
 /**
  * Drive one sampling method: start or resume, step, check the stopping rule
  * every checkEvery steps, checkpoint every checkpointSeconds (chain rows are
@@ -64,7 +44,7 @@ export async function runSampling(method: SamplingMethod, s: ValidatedRunSetting
   const names = s.parameters.map((p) => p.name);
   const dim = names.length;
   const header = chainCsvHeader(method.memberLabel, names);
-  const fingerprint = fingerprintOf(s, method);
+  const fingerprint = runFingerprint(s, method);
   const resuming = s.resume && existsSync(paths.state);
 
   let history: ChainHistory;
@@ -76,13 +56,7 @@ export async function runSampling(method: SamplingMethod, s: ValidatedRunSetting
   let converged = false;
   let chainBytes: number;
   if (resuming) {
-    const cp = readRunJson<SamplingCheckpoint>(paths.state, 'output');
-    if (cp.format !== 'treble-sampling-state') throw new InputError(`output: ${paths.state} is not a treble sampling checkpoint`);
-    for (const key of new Set([...Object.keys(fingerprint), ...Object.keys(cp.fingerprint)])) {
-      if (JSON.stringify(fingerprint[key]) !== JSON.stringify(cp.fingerprint[key])) {
-        throw new InputError(`${key}: ${JSON.stringify(fingerprint[key])} differs from the checkpointed run's ${JSON.stringify(cp.fingerprint[key])}; cannot resume ${paths.state}`);
-      }
-    }
+    const cp = readCheckpoint(paths.state, fingerprint);
     history = readChainCsv(paths.chain, cp.chainBytes, header, method.members, dim);
     if (history.steps !== cp.steps) throw new InputError(`output: ${paths.chain} holds ${history.steps} steps, the checkpoint ${cp.steps}`);
     kernel = method.restoreKernel(cp.kernel);
@@ -117,20 +91,7 @@ export async function runSampling(method: SamplingMethod, s: ValidatedRunSetting
   const checkpoint = (k: SamplerKernel) => {
     chainBytes = appendDurably(paths.chain, chainCsvRows(history, written, history.steps), chainBytes);
     written = history.steps;
-    const state: SamplingCheckpoint = {
-      format: 'treble-sampling-state',
-      formatVersion: 1,
-      chainBytes,
-      steps: k.step,
-      converged,
-      fingerprint,
-      kernel: k.saveState(),
-      failures,
-      memo,
-      note,
-      expectedSteps,
-    };
-    writeJsonAtomically(paths.state, state);
+    writeCheckpoint(paths.state, { chainBytes, steps: k.step, converged, fingerprint, kernel: k.saveState(), failures, memo, note, expectedSteps });
   };
   const sidecar = (status: RunStatus, message: string | null, diagnostics: RunDiagnostics | null) =>
     writeJsonAtomically(paths.sidecar, buildSidecar(s, method, paths, { status, message, steps: history.steps, failures, diagnostics }));
