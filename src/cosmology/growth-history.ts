@@ -3,7 +3,8 @@ import type { Background } from './background.js';
 /**
  * Scale-independent linear growth of the matter field from the growth ODE in
  * x = ln a (e.g. Dodelson & Schmidt, Modern Cosmology 2nd ed., eq. 8.77 rewritten in ln a):
- *   D'' + (2 + dlnE/dlna) D' - (3/2) Omega_m(a) D = 0.
+ *   D'' + (2 + dlnE/dlna) D' - (3/2) Omega_cl(a) D = 0,
+ * Omega_cl the clustering fraction (cold matter plus rho - 3p of the massive neutrinos).
  * The growing mode starts at a = 1e-5 from the exact matter + radiation
  * solution D = a + (2/3) a_eq (Meszaros 1974), so D / a -> 1 deep in matter
  * domination and D = a exactly in Einstein–de Sitter. Fixed-step classical RK4;
@@ -28,7 +29,7 @@ export class GrowthHistory {
     this.d = new Float64Array(n);
     this.dPrime = new Float64Array(n);
     this.dSecond = new Float64Array(n);
-    const aEq = background.omegaRadiation0 / background.omegaMatter0;
+    const aEq = background.equalityScaleFactor;
     let y = aStart + (2 / 3) * aEq;
     let v = aStart;
     const h = this.step;
@@ -55,8 +56,7 @@ export class GrowthHistory {
   private accel(x: number, y: number, v: number): number {
     const a = Math.exp(x);
     const bg = this.background;
-    const omegaM = bg.omegaMatter0 / (a * a * a * bg.e2(a));
-    return -(2 + bg.dlnEdlna(a)) * v + 1.5 * omegaM * y;
+    return -(2 + bg.dlnEdlna(a)) * v + 1.5 * bg.clusteringFraction(a) * y;
   }
 
   /** Cubic Hermite interpolation of (value, slope) node arrays at x = ln a. */

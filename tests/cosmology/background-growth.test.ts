@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { Background, backgroundOf } from '../../src/cosmology/background.js';
 import { validateCosmology } from '../../src/cosmology/cosmology-parameters.js';
 import { GrowthHistory } from '../../src/cosmology/growth-history.js';
+import { thermalNeutrinoClustering, thermalNeutrinoEnergy } from '../../src/cosmology/neutrino-thermal-density.js';
 import { HUBBLE_DISTANCE_MPC_H } from '../../src/cosmology/physical-constants.js';
 
 interface FixtureCase {
@@ -85,5 +86,23 @@ describe('growth rate against the Omega_m(z)^0.55 rule (Linder 2005, PRD 72, 043
   });
   it('within 0.2% for z in [0.3, 3]', () => {
     for (let z = 0.3; z <= 3.0001; z += 0.1) expect(relative(growth.rate(z), bg.omegaMatterAt(z) ** 0.55)).toBeLessThan(0.002);
+  });
+});
+
+describe('thermal massive neutrinos (relativistic Fermi–Dirac, Lesgourgues & Pastor 2006, sec. 4)', () => {
+  const fd = (fixture as unknown as { fermiDirac: { y: number[]; energy: number[]; clustering: number[] } }).fermiDirac;
+  it('G(y) = rho / rho_massless agrees with scipy quad to 1e-8, and C(y) = (rho - 3p) / rho_massless to 1e-8 of G', () => {
+    // C is measured against G: it is an additive part of the neutrino density, and vanishes like y^2 while relativistic.
+    fd.y.forEach((y, i) => {
+      expect(relative(thermalNeutrinoEnergy(y), fd.energy[i])).toBeLessThan(1e-8);
+      expect(Math.abs(thermalNeutrinoClustering(y) - fd.clustering[i]) / fd.energy[i]).toBeLessThan(1e-8);
+    });
+  });
+  it('the late-time neutrino density is sum m / 93.14 eV (Mangano et al. 2005) to 1e-4 for 0.06 eV', () => {
+    const bg = backgroundOf(validateCosmology({ h: 0.7, omegaB: 0.022, omegaCdm: 0.12, ns: 0.96, lnAs: 3, mNu: 0.06, massiveNuCount: 1 }));
+    expect(relative(bg.omegaNu0 * 0.49, 0.06 / 93.14)).toBeLessThan(1e-4);
+    // Early on the massive species is radiation with the massless density: E(a) as with three massless species.
+    const noNu = backgroundOf(validateCosmology({ h: 0.7, omegaB: 0.022, omegaCdm: 0.12, ns: 0.96, lnAs: 3 }));
+    expect(relative(bg.e2(1e-7), noNu.e2(1e-7))).toBeLessThan(1e-6);
   });
 });
