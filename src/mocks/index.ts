@@ -10,3 +10,4 @@ export * from './linear-galaxy-field.js';
 export * from './second-order-field.js';
 export * from './stochastic-field.js';
 export * from './box-measurement.js';
+export * from './mass-assignment.js';
