@@ -69,6 +69,15 @@ describe('posterior plots', () => {
     });
   });
 
+  it('thins harder when there are many walkers, about 24000 points per panel', () => {
+    const walkers = Array.from({ length: 60 }, (_, w) => Float64Array.from({ length: 2000 }, (_, s) => w + Math.cos(s)));
+    const svg = renderTracePlotSvg({ parameters: [{ label: 'q', chains: walkers }] });
+    const traces = drawnElements(svg, 'path').filter((p) => p.fill === 'none');
+    expect(traces).toHaveLength(60);
+    // 24000 / 60 = 400 points per walker: stride 5 over 2000 steps gives steps 0, 5, ..., 1995, plus the last one.
+    for (const t of traces) expect(pathPoints(t.d)[0]).toHaveLength(401);
+  });
+
   it('traces Fisher ellipses on Delta chi^2 = 2.30 and 6.18 of the given covariance', () => {
     const cov = [
       [0.04, -0.012],

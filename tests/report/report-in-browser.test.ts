@@ -68,6 +68,7 @@ describe('the HTML report in headless Chromium', () => {
 
     const svgs = page.locator('figure > svg');
     expect(await svgs.count()).toBe(input.figures.length);
+    expect(await page.locator('svg').count()).toBe(input.figures.length);
     for (let i = 0; i < input.figures.length; i++) {
       const svg = svgs.nth(i);
       await svg.scrollIntoViewIfNeeded();

@@ -105,7 +105,7 @@ function diagonalPanel(input: CornerPlotInput, p: number, box: Box, range: [numb
   const histograms = input.sets.map((set) => densityHistogram(set.samples[p], range[0], range[1], input.bins ?? defaultBinCount(set.samples[p].length)));
   const peak = Math.max(...histograms.map((h) => Math.max(...h.density)));
   const panel = makePanel(box, { xDomain: range, yDomain: [0, peak * 1.1] });
-  let out = renderPanelAxes(panel, { ...style, yTickLabels: false, yLabel: undefined, grid: false });
+  let out = renderPanelAxes(panel, { ...style, yTickLabels: false, yTickMarks: false, yLabel: undefined, grid: false });
   histograms.forEach((h, s) => {
     const colour = seriesColour(s);
     const step: Array<[number, number]> = [[panel.x.map(h.edges[0]), panel.y.map(0)]];

@@ -19,7 +19,7 @@ export interface TracePlotInput {
   parameters: readonly TraceParameter[];
   /** Steps discarded as burn-in, shaded (default 0). */
   burnIn?: number;
-  /** Each chain is thinned to at most this many drawn points (default 800). */
+  /** Each chain is thinned to at most this many drawn points (default 800, fewer with many chains: ~24000 per panel, at least 100 each). */
   maxPointsPerChain?: number;
   title?: string;
   width?: number;
@@ -42,7 +42,9 @@ export function renderTracePlotSvg(input: TracePlotInput): string {
   if (!Number.isInteger(burnIn) || burnIn < 0 || burnIn >= steps) {
     throw new InputError(`trace burnIn must be a whole number in [0, ${steps}), got ${burnIn}`);
   }
-  const stride = Math.max(1, Math.ceil(steps / (input.maxPointsPerChain ?? 800)));
+  const chainCount = input.parameters[0].chains.length;
+  const perChain = input.maxPointsPerChain ?? Math.max(100, Math.min(800, Math.floor(24000 / chainCount)));
+  const stride = Math.max(1, Math.ceil(steps / perChain));
   const width = input.width ?? 720;
   const rowHeight = input.rowHeight ?? 110;
   const top = titleSpace(input.title);
@@ -50,7 +52,7 @@ export function renderTracePlotSvg(input: TracePlotInput): string {
   const np = input.parameters.length;
   const height = top + np * rowHeight + (np - 1) * gap + 48;
   const xDomain: [number, number] = [0, Math.max(1, steps - 1)];
-  const many = input.parameters[0].chains.length > 8;
+  const many = chainCount > 8;
 
   let body = '';
   input.parameters.forEach((p, row) => {

@@ -8,6 +8,8 @@ export interface PanelAxesStyle {
   /** Print tick labels on the x axis (off for panels stacked above another). */
   xTickLabels?: boolean;
   yTickLabels?: boolean;
+  /** Draw the y tick marks at all (off for panels whose y scale means nothing to the reader). */
+  yTickMarks?: boolean;
   grid?: boolean;
   /** Distance of the y label from the frame, px. */
   yLabelOffset?: number;
@@ -36,7 +38,7 @@ export function renderPanelAxes(panel: Panel, style: PanelAxesStyle = {}): strin
     out += svgLine(px, bottom, px, bottom + TICK_LENGTH, { stroke: INK });
     if (style.xTickLabels ?? true) out += svgText(px, bottom + TICK_LENGTH + 12, panel.x.tickLabel(v), { 'text-anchor': 'middle' });
   }
-  for (const v of panel.y.ticks.values) {
+  for (const v of style.yTickMarks ?? true ? panel.y.ticks.values : []) {
     const py = panel.y.map(v);
     out += svgLine(panel.left - TICK_LENGTH, py, panel.left, py, { stroke: INK });
     if (style.yTickLabels ?? true) out += svgText(panel.left - TICK_LENGTH - 3, py + 4, panel.y.tickLabel(v), { 'text-anchor': 'end' });
