@@ -11,7 +11,8 @@
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fundamentalFrequency } from '../src/numerics/lattice-shell.js';
+import { fundamentalFrequency, latticeShell } from '../src/numerics/lattice-shell.js';
+import { legendre } from '../src/numerics/legendre.js';
 import { addGaussianBispectrumVariance } from '../src/data/covariance/gaussian-bispectrum-variance.js';
 import { addGaussianPowerCovariance } from '../src/data/covariance/gaussian-power-covariance.js';
 import type { MeasuredEntry } from '../src/data/data-vector.js';
@@ -64,13 +65,24 @@ rmSync(folder, { recursive: true, force: true });
 
 const { mean, variance } = columnMoments(rows);
 const size = entries.length;
-// Theory at the fiducial point: Kaiser multipoles (Kaiser 1987; Hamilton 1992) at the effective k.
-const kaiser = [b1 * b1 + (2 * b1 * f) / 3 + (f * f) / 5, (4 * b1 * f) / 3 + (4 * f * f) / 7, (8 * f * f) / 35];
-const theory = Float64Array.from(entries, (e) => (e.statistic === 'P' ? kaiser[e.ell / 2] * spectrum.power(e.kEffective[0]) : 0));
+// Expected P_l: (2l+1) < (b1 + f mu^2)^2 P(k) L_l(mu) > over the lattice modes of each shell (the
+// estimator's own average; on a lattice P_4 of an isotropic field is not zero at low k).
+// The B variance uses the Kaiser monopole (Kaiser 1987, MNRAS 227, 1) b1^2 + 2 b1 f / 3 + f^2 / 5.
+const kaiser0 = b1 * b1 + (2 * b1 * f) / 3 + (f * f) / 5;
+const theory = Float64Array.from(entries, (e) => {
+  if (e.statistic !== 'P') return 0;
+  const shell = latticeShell(boxSize, e.k[0] - plan.power.dk / 2, e.k[0] + plan.power.dk / 2);
+  let sum = 0;
+  for (let v = 0; v < shell.count; v++) {
+    const mu = shell.vectors[3 * v + 2] / Math.sqrt(shell.normSquared[v]);
+    sum += (b1 + f * mu * mu) ** 2 * spectrum.power(kf * Math.sqrt(shell.normSquared[v])) * legendre(e.ell, mu);
+  }
+  return ((2 * e.ell + 1) * sum) / shell.count;
+});
 const cov = new Float64Array(size * size);
 addGaussianPowerCovariance({ entries, theory, shotNoise: 1 / nbar, dk: plan.power.dk, volume: boxSize ** 3, boxSize, modeCounts: 'lattice' }, cov);
 addGaussianBispectrumVariance(
-  { entries, monopoleAt: (k) => kaiser[0] * spectrum.power(k), shotNoise: 1 / nbar, dk: 2 * kf, volume: boxSize ** 3, boxSize, triangleCounts: 'measured' },
+  { entries, monopoleAt: (k) => kaiser0 * spectrum.power(k), shotNoise: 1 / nbar, dk: 2 * kf, volume: boxSize ** 3, boxSize, triangleCounts: 'measured' },
   cov,
 );
 
