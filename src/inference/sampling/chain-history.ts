@@ -47,6 +47,17 @@ export class ChainHistory {
     return out;
   }
 
+  /** Points of steps [from, to) of all members as rows (step-major, then member), count x dim. */
+  points(from = 0, to = this.steps): Float64Array {
+    const count = Math.max(0, to - from) * this.members;
+    const out = new Float64Array(count * this.dim);
+    for (let r = 0; r < count; r++) {
+      const o = (from * this.members + r) * this.width + 1;
+      out.set(this.data.subarray(o, o + this.dim), r * this.dim);
+    }
+    return out;
+  }
+
   /** Parameter p over steps [from, to) for every member. */
   seriesByMember(p: number, from = 0, to = this.steps): Float64Array[] {
     return Array.from({ length: this.members }, (_, m) => this.series(m, p, from, to));

@@ -36,6 +36,9 @@ describe('chain file, sidecar and progress lines', () => {
     expect(lines.at(-1)?.startsWith('250,7,')).toBe(true);
     // Numbers read back are the sampled doubles.
     expect(Number(lines.at(-1)?.split(',')[3])).toBe(r.history.row(249, 7)[1]);
+    const kept = r.history.points(r.diagnostics.burnInSteps);
+    expect(kept.length).toBe((250 - r.diagnostics.burnInSteps) * 8 * 2);
+    expect(kept.slice(-2)).toEqual(Float64Array.from(lines.at(-1)!.split(',').slice(3).map(Number)));
     const sidecar = JSON.parse(readFileSync(`${stem}.json`, 'utf8')) as ChainSidecar;
     expect(sidecar.software).toEqual({ name: 'treble', version });
     expect(sidecar.status).toBe('max-steps');

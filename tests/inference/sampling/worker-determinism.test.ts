@@ -31,9 +31,9 @@ describe('the same seed gives bit-identical chains for any number of workers', (
     for (const t of texts.slice(1)) expect(t).toBe(texts[0]);
   });
 
-  it('independent chains with 1 and 2 workers, and another seed differs', async () => {
+  it('independent chains on this thread and on 2 workers, and another seed differs', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'treble-det-'));
-    const a = await sampleIndependentChains({ ...common, workers: 1, output: join(dir, 'a') });
+    const a = await sampleIndependentChains({ ...common, workers: 0, output: join(dir, 'a') });
     const b = await sampleIndependentChains({ ...common, workers: 2, output: join(dir, 'b') });
     const c = await sampleIndependentChains({ ...common, workers: 0, seed: 1235, output: join(dir, 'c') });
     expect(readFileSync(b.files.chain, 'utf8')).toBe(readFileSync(a.files.chain, 'utf8'));
