@@ -17,8 +17,15 @@ async function runAndSignal(stem: string, signal: NodeJS.Signals, delayMs: numbe
   let stderr = '';
   proc.stdout.on('data', (d) => (stdout += d));
   proc.stderr.on('data', (d) => (stderr += d));
-  const ended = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) => proc.on('exit', (code, sig) => resolve({ code, signal: sig })));
-  while (!existsSync(`${stem}.state.json`)) await sleep(20);
+  let exited = false;
+  const ended = new Promise<{ code: number | null; signal: NodeJS.Signals | null }>((resolve) =>
+    proc.on('exit', (code, sig) => {
+      exited = true;
+      resolve({ code, signal: sig });
+    }),
+  );
+  while (!existsSync(`${stem}.state.json`) && !exited) await sleep(20);
+  expect(exited, `child ended before its first checkpoint: ${stderr}`).toBe(false);
   await sleep(delayMs);
   proc.kill(signal);
   return { ...(await ended), stdout, stderr };
