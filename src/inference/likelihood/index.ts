@@ -4,3 +4,6 @@ export * from './linear-marginalisation.js';
 export * from './composite-model.js';
 export * from './model-source.js';
 export * from './joint-likelihood.js';
+export * from './alcock-paczynski-dilations.js';
+export * from './bundle-models.js';
+export * from './joint-likelihood-options.js';

@@ -10,7 +10,7 @@ import type { ParameterValues, StatisticModel } from '../../contracts/statistic-
  *                    and templateAmplitude q = sigma8 / sigma8_template. The models
  *                    see f = fsigma8 / (q sigma8_template) and a linear power
  *                    q^2 P_template; they are rebuilt only when q changes.
- * `provided` quantities (sigma8, f, fsigma8 of the current spectrum) are
+ * `provided` quantities (sigma8Cold, the growth rate, fsigma8, the dilations) are
  * reported with every point and usable in derived-parameter expressions.
  */
 export interface PreparedModels {
@@ -32,16 +32,24 @@ export interface ModelSource {
 
 export type ModelsForSpectrum = (spectrum: LinearSpectrum) => readonly StatisticModel[];
 
-const PROVIDED = ['sigma8', 'fsigma8', 'growthRate'] as const;
+const PROVIDED = ['sigma8Cold', 'fsigma8', 'growthRate', 'alphaPar', 'alphaPerp'] as const;
 
-function spectrumQuantities(s: LinearSpectrum, f: number): Record<string, number> {
-  return { sigma8: s.sigma8, fsigma8: f * s.sigma8, growthRate: s.growthRateLargeScale };
+/** What full mode builds from the cosmology parameters: the spectrum and the AP dilations. */
+export interface CosmologyBuild {
+  readonly spectrum: LinearSpectrum;
+  /** Dilations relative to the measurement's fiducial cosmology; default 1. */
+  readonly alphaPar?: number;
+  readonly alphaPerp?: number;
 }
 
-/** Full mode: `spectrumFor` builds the linear spectrum from the cosmology parameters `names`. */
-export function fullCosmologySource(names: readonly string[], spectrumFor: (cosmology: ParameterValues) => LinearSpectrum, build: ModelsForSpectrum): ModelSource {
+/**
+ * Full mode: `build` makes the linear spectrum (and AP dilations) from the
+ * cosmology parameters `names`. The models see the computed dilations and
+ * f = the spectrum's large-scale growth rate unless f is a declared parameter.
+ */
+export function fullCosmologySource(names: readonly string[], cosmologyFor: (cosmology: ParameterValues) => CosmologyBuild, build: ModelsForSpectrum): ModelSource {
   let key = '';
-  let cache: { spectrum: LinearSpectrum; models: readonly StatisticModel[] } | undefined;
+  let cache: { cosmology: CosmologyBuild; models: readonly StatisticModel[] } | undefined;
   return {
     mode: 'full',
     providedNames: PROVIDED,
@@ -51,12 +59,19 @@ export function fullCosmologySource(names: readonly string[], spectrumFor: (cosm
       for (const n of names) cosmology[n] = values[n];
       const k = names.map((n) => cosmology[n]).join(',');
       if (!cache || k !== key) {
-        const spectrum = spectrumFor(cosmology);
-        cache = { spectrum, models: build(spectrum) };
+        const c = cosmologyFor(cosmology);
+        cache = { cosmology: c, models: build(c.spectrum) };
         key = k;
       }
-      const f = values.f ?? cache.spectrum.growthRateLargeScale;
-      return { models: cache.models, modelValues: { ...values, f }, provided: spectrumQuantities(cache.spectrum, f) };
+      const { spectrum } = cache.cosmology;
+      const f = values.f ?? spectrum.growthRateLargeScale;
+      const alphaPar = cache.cosmology.alphaPar ?? 1;
+      const alphaPerp = cache.cosmology.alphaPerp ?? 1;
+      return {
+        models: cache.models,
+        modelValues: { ...values, f, alphaPar, alphaPerp },
+        provided: { sigma8Cold: spectrum.sigma8, fsigma8: f * spectrum.sigma8, growthRate: spectrum.growthRateLargeScale, alphaPar, alphaPerp },
+      };
     },
     describe: () => ({ cosmologyMode: 'full', cosmologyParameters: names.join(', ') }),
   };
@@ -86,14 +101,14 @@ export function fixedTemplateSource(template: LinearSpectrum, build: ModelsForSp
   let cache: { q: number; models: readonly StatisticModel[] } | undefined;
   return {
     mode: 'fixed-template',
-    providedNames: ['sigma8', 'f'],
+    providedNames: ['sigma8Cold', 'f'],
     requiredNames: TEMPLATE_PARAMETERS,
     prepare(values) {
       const q = values.templateAmplitude;
       if (!cache || cache.q !== q) cache = { q, models: build(scaledSpectrum(template, q)) };
       const sigma8 = q * template.sigma8;
       const f = values.fsigma8 / sigma8;
-      return { models: cache.models, modelValues: { ...values, f }, provided: { sigma8, f } };
+      return { models: cache.models, modelValues: { ...values, f }, provided: { sigma8Cold: sigma8, f } };
     },
     describe: () => ({ cosmologyMode: 'fixed-template', templateSigma8: template.sigma8, templateRedshift: template.redshift }),
   };

@@ -36,7 +36,7 @@ export interface SafeExpression {
   readonly text: string;
   /** Variable names the expression reads. */
   readonly variables: readonly string[];
-  /** Value for the given variables; NaN when the result is not a real number. */
+  /** Value for the given variables; NaN when one is missing or the result is not a real number. */
   evaluate(values: Readonly<Record<string, number>>): number;
 }
 
@@ -91,7 +91,11 @@ export function compileSafeExpression(text: string, variables: Iterable<string>,
     variables: names,
     evaluate(values) {
       const scope = new Map<string, number>();
-      for (const v of names) scope.set(v, values[v]);
+      for (const v of names) {
+        const x = values[v];
+        if (x === undefined) return Number.NaN;
+        scope.set(v, x);
+      }
       const r: unknown = code.evaluate(scope);
       return typeof r === 'number' ? r : Number.NaN;
     },

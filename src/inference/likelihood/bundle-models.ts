@@ -1,0 +1,78 @@
+import { InputError } from '../../contracts/input-error.js';
+import type { LinearSpectrum } from '../../contracts/linear-spectrum.js';
+import type { StatisticModel } from '../../contracts/statistic-model.js';
+import { TreeBispectrumModel, type BinAveragingMethod } from '../../bispectrum/tree-bispectrum-model.js';
+import type { TriangleBins } from '../../bispectrum/triangle-bins.js';
+import type { MeasurementBundle } from '../../data/measurement-bundle.js';
+import type { StatisticTable } from '../../data/statistic-table.js';
+import type { PowerBinAveraging } from '../../power/bin-sampling.js';
+import { PowerMultipoleModel } from '../../power/power-multipole-model.js';
+import type { ModelsForSpectrum } from './model-source.js';
+
+/**
+ * The power-multipole and tree-level bispectrum models on a bundle's own bins
+ * (JSON-serialisable settings). The P table must list consecutive k bins; the
+ * bispectrum model is built on exactly the bundle's triangle bins.
+ */
+export interface BundleModelOptions {
+  readonly power?: { readonly averaging?: PowerBinAveraging; readonly muNodes?: number };
+  readonly bispectrum?: {
+    readonly averaging?: BinAveragingMethod;
+    readonly volumeOrder?: number;
+    readonly irResummation?: boolean;
+    readonly velocityDispersion?: number;
+  };
+}
+
+function firstCentre(t: StatisticTable): number {
+  let c = Infinity;
+  for (const v of t.centres) c = Math.min(c, v);
+  return c;
+}
+
+function triangleBinsOf(t: StatisticTable): TriangleBins {
+  let top = 0;
+  for (const s of t.shells) top = Math.max(top, s);
+  return { shells: { kMin: firstCentre(t), dk: t.dk, count: top + 1 }, size: t.size, indices: Int32Array.from(t.shells), centres: Float64Array.from(t.centres) };
+}
+
+export function bundleModels(bundle: MeasurementBundle, options: BundleModelOptions = {}): ModelsForSpectrum {
+  const { power, bispectrum, metadata } = bundle;
+  if (power) {
+    power.shells.forEach((s, i) => {
+      if (s !== i) throw new InputError(`${power.file}: the power model needs consecutive k bins, but bin ${i + 1} is shell ${s} of the grid`, { where: power.file });
+    });
+  }
+  const bins = bispectrum ? triangleBinsOf(bispectrum) : undefined;
+  return (spectrum: LinearSpectrum) => {
+    const models: StatisticModel[] = [];
+    if (power) {
+      models.push(
+        new PowerMultipoleModel({
+          spectrum,
+          bins: { kMin: firstCentre(power), dk: power.dk, count: power.size },
+          nbar: metadata.numberDensity,
+          multipoles: power.multipoles,
+          averaging: options.power?.averaging,
+          muNodes: options.power?.muNodes,
+        }),
+      );
+    }
+    if (bispectrum && bins) {
+      const b = options.bispectrum ?? {};
+      models.push(
+        new TreeBispectrumModel({
+          spectrum,
+          bins,
+          multipoles: bispectrum.multipoles,
+          numberDensity: metadata.numberDensity,
+          averaging: b.averaging,
+          volumeOrder: b.volumeOrder,
+          irResummation: b.irResummation,
+          velocityDispersion: b.velocityDispersion,
+        }),
+      );
+    }
+    return models;
+  };
+}
