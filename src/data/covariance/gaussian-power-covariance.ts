@@ -1,6 +1,6 @@
 import { legendre } from '../../numerics/legendre.js';
 import type { MeasuredEntry } from '../data-vector.js';
-import { shellModes, type ModeCountSource } from './mode-counts.js';
+import { shellModeAverage, type ModeCountSource } from './mode-counts.js';
 
 /**
  * Gaussian covariance of the power multipoles, diagonal in k bins:
@@ -36,7 +36,7 @@ export function addGaussianPowerCovariance(inp: PowerCovarianceInputs, out: Floa
   });
   for (const idx of byBin.values()) {
     const first = inp.entries[idx[0]];
-    const modes = shellModes(inp.modeCounts, first.k[0], inp.dk, first.count, inp.volume, inp.boxSize);
+    const modes = shellModeAverage(inp.modeCounts, first.k[0], inp.dk, first.count, inp.volume, inp.boxSize);
     for (let q = 0; q < modes.mu.length; q++) {
       const mu = modes.mu[q];
       let ptot = inp.shotNoise;

@@ -12,7 +12,7 @@ import { gaussLegendreOn } from '../../numerics/gauss-legendre.js';
  */
 export type ModeCountSource = 'measured' | 'continuous' | 'lattice';
 
-export interface ShellModes {
+export interface ShellModeAverage {
   readonly count: number;
   /** Cosines to average over, with weights summing to 1. */
   readonly mu: Float64Array;
@@ -29,7 +29,7 @@ export function continuousModeCount(k: number, dk: number, volume: number): numb
   return (4 * Math.PI * k * k * dk * volume) / (2 * Math.PI) ** 3;
 }
 
-export function shellModes(source: ModeCountSource, centre: number, dk: number, measured: number, volume: number, boxSize: number | undefined): ShellModes {
+export function shellModeAverage(source: ModeCountSource, centre: number, dk: number, measured: number, volume: number, boxSize: number | undefined): ShellModeAverage {
   if (source === 'measured') return { count: measured, ...UNIFORM_MU };
   if (source === 'continuous') return { count: continuousModeCount(centre, dk, volume), ...UNIFORM_MU };
   if (boxSize === undefined) throw new Error('lattice mode counts need a periodic box (checked before)');

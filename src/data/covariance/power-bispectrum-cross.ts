@@ -1,5 +1,5 @@
 import type { MeasuredEntry } from '../data-vector.js';
-import { shellModes, type ModeCountSource } from './mode-counts.js';
+import { shellModeAverage, type ModeCountSource } from './mode-counts.js';
 
 /**
  * Leading non-Gaussian cross-covariance of the power monopole and the
@@ -26,7 +26,7 @@ export function addPowerBispectrumCross(inp: CrossCovarianceInputs, out: Float64
   inp.entries.forEach((p, a) => {
     if (p.block !== 'P0') return;
     const c = p.k[0];
-    const modes = shellModes(inp.modeCounts, c, inp.dk, p.count, inp.volume, inp.boxSize).count;
+    const modes = shellModeAverage(inp.modeCounts, c, inp.dk, p.count, inp.volume, inp.boxSize).count;
     const ptot = inp.theory[a] + inp.shotNoise;
     for (const b of triangles) {
       let sides = 0;
