@@ -11,3 +11,7 @@ export * from './second-order-field.js';
 export * from './stochastic-field.js';
 export * from './box-measurement.js';
 export * from './mass-assignment.js';
+export * from './field-file.js';
+export * from './particle-file.js';
+export * from './mock-recipe.js';
+export * from './measure-mesh.js';
