@@ -1,6 +1,8 @@
 /**
  * Test target: a multivariate Gaussian log-density (normalisation dropped),
- * optionally busy-waiting `busyMs` per call to stand in for a slow likelihood.
+ * optionally busy-waiting `busyMs` per call to stand in for a slow likelihood,
+ * or sleeping `sleepMs` (no CPU used: isolates the pool's parallelism from
+ * competition for the cores).
  */
 import { choleskyFactor, solveLower } from '../../../../src/data/covariance/cholesky-factor.js';
 
@@ -8,6 +10,7 @@ export interface GaussianTargetOptions {
   mean: number[];
   covariance: number[][];
   busyMs?: number;
+  sleepMs?: number;
 }
 
 export function busyWait(ms: number): void {
@@ -24,8 +27,11 @@ export function gaussianTarget(options: GaussianTargetOptions): (theta: Float64A
   const diff = new Float64Array(d);
   const white = new Float64Array(d);
   const busyMs = options.busyMs ?? 0;
+  const sleepMs = options.sleepMs ?? 0;
+  const sleeper = new Int32Array(new SharedArrayBuffer(4));
   return (theta) => {
     if (busyMs > 0) busyWait(busyMs);
+    if (sleepMs > 0) Atomics.wait(sleeper, 0, 0, sleepMs);
     for (let i = 0; i < d; i++) diff[i] = theta[i] - mean[i];
     solveLower(factor, diff, white);
     let q = 0;
