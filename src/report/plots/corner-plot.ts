@@ -5,8 +5,8 @@ import { defaultBinCount, densityHistogram } from '../stats/density-histogram.js
 import { sampleDisplayRange } from '../stats/display-range.js';
 import { renderLegend } from '../svg/legend.js';
 import { INK, seriesColour } from '../svg/palette.js';
-import { makePanel, type Panel } from '../svg/panel.js';
-import { renderPanelAxes } from '../svg/panel-axes.js';
+import { makePanel, type Panel, type PanelBox } from '../svg/panel.js';
+import { renderPanelAxes, type PanelAxesStyle } from '../svg/panel-axes.js';
 import { svgDocument } from '../svg/svg-document.js';
 import { pathData, svgCircle, svgLine, svgPath, svgText } from '../svg/svg-elements.js';
 import { renderFigureTitle, titleSpace } from './figure-title.js';
@@ -71,7 +71,7 @@ export function renderCornerPlotSvg(input: CornerPlotInput): string {
   const ranges = input.parameters.map((p, i) =>
     mergeRanges(input.sets.map((set) => sampleDisplayRange(set.samples[i], p.truth === undefined ? [] : [p.truth]))),
   );
-  const box = (row: number, col: number) => ({ left: LEFT + col * (cell + GAP), top: top + row * (cell + GAP), width: cell, height: cell });
+  const box = (row: number, col: number): PanelBox => ({ left: LEFT + col * (cell + GAP), top: top + row * (cell + GAP), width: cell, height: cell });
 
   let body = '';
   for (let row = 0; row < np; row++) {
@@ -81,6 +81,7 @@ export function renderCornerPlotSvg(input: CornerPlotInput): string {
         yLabel: col === 0 && row > 0 ? input.parameters[row].label : undefined,
         xTickLabels: row === np - 1,
         yTickLabels: col === 0 && row > 0,
+        labelsWithinPanel: true,
         yLabelOffset: 52,
       };
       if (row === col) body += diagonalPanel(input, row, box(row, col), ranges[row], style);
@@ -98,10 +99,7 @@ export function renderCornerPlotSvg(input: CornerPlotInput): string {
   return svgDocument(width, height, input.title ?? 'Posterior corner plot', body);
 }
 
-type Box = { left: number; top: number; width: number; height: number };
-type Style = Parameters<typeof renderPanelAxes>[1];
-
-function diagonalPanel(input: CornerPlotInput, p: number, box: Box, range: [number, number], style: Style): string {
+function diagonalPanel(input: CornerPlotInput, p: number, box: PanelBox, range: [number, number], style: PanelAxesStyle): string {
   const histograms = input.sets.map((set) => densityHistogram(set.samples[p], range[0], range[1], input.bins ?? defaultBinCount(set.samples[p].length)));
   const peak = Math.max(...histograms.map((h) => Math.max(...h.density)));
   const panel = makePanel(box, { xDomain: range, yDomain: [0, peak * 1.1] });
@@ -115,7 +113,7 @@ function diagonalPanel(input: CornerPlotInput, p: number, box: Box, range: [numb
   });
   const truth = input.parameters[p].truth;
   if (truth !== undefined) out += truthLine(panel, truth, 'x');
-  if (style?.xLabel === undefined) {
+  if (style.xLabel === undefined) {
     out += svgText(box.left + box.width / 2, box.top - 5, input.parameters[p].label, { 'text-anchor': 'middle' });
   }
   return out;
@@ -125,10 +123,10 @@ function pairPanel(
   input: CornerPlotInput,
   row: number,
   col: number,
-  box: Box,
+  box: PanelBox,
   xRange: [number, number],
   yRange: [number, number],
-  style: Style,
+  style: PanelAxesStyle,
   bins: number,
 ): string {
   const panel = makePanel(box, { xDomain: xRange, yDomain: yRange });

@@ -1,4 +1,6 @@
 import { GRID_GREY, INK } from './palette.js';
+import { richTextWidthEm } from './rich-text.js';
+import { FONT_SIZE } from './svg-document.js';
 import type { Panel } from './panel.js';
 import { rotationAbout, svgLine, svgRect, svgText } from './svg-elements.js';
 
@@ -11,6 +13,8 @@ export interface PanelAxesStyle {
   /** Draw the y tick marks at all (off for panels whose y scale means nothing to the reader). */
   yTickMarks?: boolean;
   grid?: boolean;
+  /** Leave out tick labels that would reach past the panel's edges (for panels packed side by side). */
+  labelsWithinPanel?: boolean;
   /** Distance of the y label from the frame, px. */
   yLabelOffset?: number;
 }
@@ -36,12 +40,16 @@ export function renderPanelAxes(panel: Panel, style: PanelAxesStyle = {}): strin
   for (const v of panel.x.ticks.values) {
     const px = panel.x.map(v);
     out += svgLine(px, bottom, px, bottom + TICK_LENGTH, { stroke: INK });
-    if (style.xTickLabels ?? true) out += svgText(px, bottom + TICK_LENGTH + 12, panel.x.tickLabel(v), { 'text-anchor': 'middle' });
+    const label = panel.x.tickLabel(v);
+    const halfWidth = (richTextWidthEm(label) * FONT_SIZE) / 2;
+    const fits = !style.labelsWithinPanel || (px - halfWidth >= panel.left - 3 && px + halfWidth <= right + 3);
+    if ((style.xTickLabels ?? true) && fits) out += svgText(px, bottom + TICK_LENGTH + 12, label, { 'text-anchor': 'middle' });
   }
   for (const v of style.yTickMarks ?? true ? panel.y.ticks.values : []) {
     const py = panel.y.map(v);
     out += svgLine(panel.left - TICK_LENGTH, py, panel.left, py, { stroke: INK });
-    if (style.yTickLabels ?? true) out += svgText(panel.left - TICK_LENGTH - 3, py + 4, panel.y.tickLabel(v), { 'text-anchor': 'end' });
+    const fits = !style.labelsWithinPanel || (py >= panel.top + 2 && py <= bottom - 2);
+    if ((style.yTickLabels ?? true) && fits) out += svgText(panel.left - TICK_LENGTH - 3, py + 4, panel.y.tickLabel(v), { 'text-anchor': 'end' });
   }
   if (style.xLabel !== undefined) {
     out += svgText(panel.left + panel.width / 2, bottom + 34, style.xLabel, { 'text-anchor': 'middle' });
