@@ -40,7 +40,7 @@ describe('sample statistics for plots', () => {
   });
 
   it('draws 68% and 95% contours that enclose those fractions of a correlated Gaussian sample', () => {
-    const { x, y } = correlatedGaussian(40000, 11, 0.7);
+    const { x, y } = correlatedGaussian(20000, 11, 0.7);
     const contours = credibleContours(x, y, [0.68, 0.95], {
       xDomain: [1 - 9, 1 + 9],
       yDomain: [-3 - 2.25, -3 + 2.25],
