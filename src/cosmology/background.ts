@@ -145,6 +145,16 @@ export class Background {
 
   /** d ln E / d ln a at scale factor a; the neutrinos obey d rho / d ln a = -3 (rho + p) = -4 rho + (rho - 3p). */
   dlnEdlna(a: number): number {
+    return this.growthCoefficients(a).dlnEdlna;
+  }
+
+  /** Fraction of the critical density at a that clusters like matter: cold matter plus (rho - 3p) of the neutrinos. */
+  clusteringFraction(a: number): number {
+    return this.growthCoefficients(a).clusteringFraction;
+  }
+
+  /** Both coefficients of the growth equation at a, sharing one evaluation of the neutrino densities. */
+  growthCoefficients(a: number): { dlnEdlna: number; clusteringFraction: number } {
     const ia = 1 / a;
     const ia3 = ia * ia * ia;
     const r = this.omegaRadiation0 * ia3 * ia;
@@ -153,14 +163,11 @@ export class Background {
     const nuCl = this.neutrinoClustering(a, ia3 * ia);
     const w = this.w0 + this.wa * (1 - a);
     const de = this.omegaDarkEnergy0 * this.darkEnergyScaling(a);
-    return (-4 * r - 3 * c - 4 * nu + nuCl - 3 * (1 + w) * de) / (2 * (r + c + nu + de));
-  }
-
-  /** Fraction of the critical density at a that clusters like matter: cold matter plus (rho - 3p) of the neutrinos. */
-  clusteringFraction(a: number): number {
-    const ia = 1 / a;
-    const ia3 = ia * ia * ia;
-    return (this.omegaCold0 * ia3 + this.neutrinoClustering(a, ia3 * ia)) / this.e2(a);
+    const e2 = r + c + nu + de;
+    return {
+      dlnEdlna: (-4 * r - 3 * c - 4 * nu + nuCl - 3 * (1 + w) * de) / (2 * e2),
+      clusteringFraction: (c + nuCl) / e2,
+    };
   }
 
   /** Matter density parameter Omega_m(z): cold matter plus the massive neutrinos' energy density. */

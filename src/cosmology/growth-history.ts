@@ -17,10 +17,11 @@ export class GrowthHistory {
   readonly d: Float64Array;
   readonly dPrime: Float64Array;
   readonly dSecond: Float64Array;
-  private readonly background: Background;
+  /** Growth-equation coefficients 2 + dlnE/dlna and (3/2) Omega_cl at the half steps x_j = lnA0 + j step / 2. */
+  private readonly drag: Float64Array;
+  private readonly source: Float64Array;
 
   constructor(background: Background, options: { aStart?: number; steps?: number } = {}) {
-    this.background = background;
     const aStart = options.aStart ?? 1e-5;
     const steps = options.steps ?? 384;
     this.lnA0 = Math.log(aStart);
@@ -29,34 +30,39 @@ export class GrowthHistory {
     this.d = new Float64Array(n);
     this.dPrime = new Float64Array(n);
     this.dSecond = new Float64Array(n);
+    this.drag = new Float64Array(2 * steps + 1);
+    this.source = new Float64Array(2 * steps + 1);
+    for (let j = 0; j <= 2 * steps; j++) {
+      const g = background.growthCoefficients(Math.exp(this.lnA0 + 0.5 * j * this.step));
+      this.drag[j] = 2 + g.dlnEdlna;
+      this.source[j] = 1.5 * g.clusteringFraction;
+    }
     const aEq = background.equalityScaleFactor;
     let y = aStart + (2 / 3) * aEq;
     let v = aStart;
     const h = this.step;
     for (let i = 0; i < n; i++) {
-      const x = this.lnA0 + i * h;
       this.d[i] = y;
       this.dPrime[i] = v;
-      this.dSecond[i] = this.accel(x, y, v);
+      this.dSecond[i] = this.accel(2 * i, y, v);
       if (i === n - 1) break;
-      // RK4 for the system (y, v)' = (v, accel(x, y, v)).
+      // RK4 for the system (y, v)' = (v, accel(x, y, v)); half-step coefficients sit at index 2i + 1.
       const k1y = v;
       const k1v = this.dSecond[i];
       const k2y = v + 0.5 * h * k1v;
-      const k2v = this.accel(x + 0.5 * h, y + 0.5 * h * k1y, k2y);
+      const k2v = this.accel(2 * i + 1, y + 0.5 * h * k1y, k2y);
       const k3y = v + 0.5 * h * k2v;
-      const k3v = this.accel(x + 0.5 * h, y + 0.5 * h * k2y, k3y);
+      const k3v = this.accel(2 * i + 1, y + 0.5 * h * k2y, k3y);
       const k4y = v + h * k3v;
-      const k4v = this.accel(x + h, y + h * k3y, k4y);
+      const k4v = this.accel(2 * i + 2, y + h * k3y, k4y);
       y += (h / 6) * (k1y + 2 * k2y + 2 * k3y + k4y);
       v += (h / 6) * (k1v + 2 * k2v + 2 * k3v + k4v);
     }
   }
 
-  private accel(x: number, y: number, v: number): number {
-    const a = Math.exp(x);
-    const bg = this.background;
-    return -(2 + bg.dlnEdlna(a)) * v + 1.5 * bg.clusteringFraction(a) * y;
+  /** D'' at half-step node j. */
+  private accel(j: number, y: number, v: number): number {
+    return -this.drag[j] * v + this.source[j] * y;
   }
 
   /** Cubic Hermite interpolation of (value, slope) node arrays at x = ln a. */
