@@ -48,6 +48,18 @@ export function sumLatticeTriangles(
   const sums = integrand ? new Float64Array(bins.size * nM * size) : null;
   const scratch = new Float64Array(size);
   const weights = new Float64Array(nM);
+  // Bins whose first shell is i span [binLo[i], binHi[i]]; for one q1 the
+  // integrand is summed there unweighted, then the Legendre weights of q1 applied.
+  const binLo = new Int32Array(nShell).fill(bins.size);
+  const binHi = new Int32Array(nShell).fill(-1);
+  for (let b = 0; b < bins.size; b++) {
+    const i = bins.indices[3 * b];
+    binLo[i] = Math.min(binLo[i], b);
+    binHi[i] = Math.max(binHi[i], b);
+  }
+  let span = 0;
+  for (let i = 0; i < nShell; i++) span = Math.max(span, binHi[i] - binLo[i] + 1);
+  const perQ1 = new Float64Array(span * size);
   const withZFlip = integrand === null || evenInMu;
 
   for (const i of [...firstShells].sort((a, b) => a - b)) {
@@ -65,6 +77,8 @@ export function sumLatticeTriangles(
       const k1 = kf * root[a1];
       const mu1 = z1 / root[a1];
       for (let m = 0; m < nM; m++) weights[m] = orbit * (2 * multipoles[m] + 1) * legendre(multipoles[m], mu1);
+      const first = binLo[i];
+      if (sums !== null) perQ1.fill(0, 0, (binHi[i] - first + 1) * size);
       const xLo = Math.max(-reach, -x1 - reach);
       const xHi = Math.min(reach, -x1 + reach);
       for (let x2 = xLo; x2 <= xHi; x2++) {
@@ -94,12 +108,18 @@ export function sumLatticeTriangles(
             counts[b] += orbit;
             if (sums === null || integrand === null) continue;
             integrand.evaluate(k1, kf * root[a2], kf * root[a3], mu1, z2 / root[a2], -w / root[a3], scratch, 0);
-            for (let m = 0; m < nM; m++) {
-              const wm = weights[m];
-              const o = (b * nM + m) * size;
-              for (let t = 0; t < size; t++) sums[o + t] += wm * scratch[t];
-            }
+            const o = (b - first) * size;
+            for (let t = 0; t < size; t++) perQ1[o + t] += scratch[t];
           }
+        }
+      }
+      if (sums === null) continue;
+      for (let b = first; b <= binHi[i]; b++) {
+        for (let m = 0; m < nM; m++) {
+          const wm = weights[m];
+          const o = (b * nM + m) * size;
+          const p = (b - first) * size;
+          for (let t = 0; t < size; t++) sums[o + t] += wm * perQ1[p + t];
         }
       }
     }

@@ -1,0 +1,111 @@
+/**
+ * Accuracy of the three box-free bin averages (bin centres, effective
+ * wavenumbers, continuous bin volume) against the exact discrete-box average,
+ * for the tree-level redshift-space B_0 and B_2: dk = 0.01 h/Mpc, centres
+ * 0.01-0.10 h/Mpc, boxes L = 1000, 2000, 3000 Mpc/h. Prints markdown tables of
+ * |approximation / exact - 1| by shape class (docs/bispectrum-bin-averaging.md).
+ *
+ *   npx tsx scripts/lattice-accuracy-study.ts [L ...]        tables
+ *   npx tsx scripts/lattice-accuracy-study.ts --part L top   exact average of the bins whose
+ *                                                            first shell is the top one (or
+ *                                                            `rest`) only, into the cache
+ * The exact averages are cached by bin list (src/bispectrum/lattice/lattice-cache.ts),
+ * always for the same two parts (first shell on top / the rest), which two
+ * processes can compute side by side.
+ */
+import { averageAtBinCentres, averageAtEffectiveWavenumbers, averageOverBinVolume } from '../src/bispectrum/bin-averaging.js';
+import { discreteBoxBinAverage } from '../src/bispectrum/lattice/discrete-box-average.js';
+import { enumerateTriangleBins, shellGrid, type TriangleBins } from '../src/bispectrum/triangle-bins.js';
+import { studyDirectIntegrand } from './lattice-study-model.js';
+import { studyShapeClass } from './lattice-study-shapes.js';
+
+const multipoles = [0, 2];
+const bins = enumerateTriangleBins(shellGrid(0.01, 0.1, 0.01));
+const nB = bins.size;
+const top = bins.shells.count - 1;
+
+function part(which: 'top' | 'rest'): { sub: TriangleBins; members: number[] } {
+  const members = [...Array(nB).keys()].filter((b) => (bins.indices[3 * b] === top) === (which === 'top'));
+  const indices = Int32Array.from(members.flatMap((b) => [...bins.indices.subarray(3 * b, 3 * b + 3)]));
+  const centres = Float64Array.from(members.flatMap((b) => [...bins.centres.subarray(3 * b, 3 * b + 3)]));
+  return { sub: { shells: bins.shells, size: members.length, indices, centres }, members };
+}
+
+/** Exact B_l [bin][multipole] of the whole binning, from the two parts. */
+function exactAverage(boxSize: number): { values: Float64Array; seconds: number; fromCache: boolean } {
+  const values = new Float64Array(nB * multipoles.length);
+  let seconds = 0;
+  let fromCache = true;
+  for (const which of ['top', 'rest'] as const) {
+    const { sub, members } = part(which);
+    const r = discreteBoxBinAverage(sub, boxSize, studyDirectIntegrand(boxSize), { multipoles });
+    seconds += r.seconds;
+    fromCache &&= r.fromCache;
+    members.forEach((b, n) => values.set(r.values.subarray(n * multipoles.length, (n + 1) * multipoles.length), b * multipoles.length));
+  }
+  return { values, seconds, fromCache };
+}
+
+if (process.argv[2] === '--part') {
+  const boxSize = Number(process.argv[3]);
+  const which = process.argv[4] === 'top' ? 'top' : 'rest';
+  const r = discreteBoxBinAverage(part(which).sub, boxSize, studyDirectIntegrand(boxSize), { multipoles });
+  console.log(`L=${boxSize} part ${which}: ${r.fromCache ? 'cached' : 'computed'} in ${r.seconds.toFixed(1)} s`);
+  process.exit(0);
+}
+
+const boxes = process.argv.length > 2 ? process.argv.slice(2).map(Number) : [1000, 2000, 3000];
+const direct = studyDirectIntegrand();
+const approximations: Record<string, Float64Array> = {
+  centres: averageAtBinCentres(bins, direct, { multipoles }),
+  effective: averageAtEffectiveWavenumbers(bins, direct, { multipoles }),
+  continuous: averageOverBinVolume(bins, direct, { multipoles }),
+};
+
+interface Summary {
+  n: number;
+  rms: number;
+  median: number;
+  p90: number;
+  max: number;
+}
+
+function summarise(d: number[]): Summary {
+  const s = [...d].sort((a, b) => a - b);
+  const q = (p: number): number => s[Math.min(s.length - 1, Math.floor(p * s.length))];
+  return { n: s.length, rms: Math.sqrt(s.reduce((a, x) => a + x * x, 0) / s.length), median: q(0.5), p90: q(0.9), max: s[s.length - 1] };
+}
+
+const shape = Array.from({ length: nB }, (_, n) => studyShapeClass(bins, n));
+const classNames = ['all', ...[...new Set(shape)].sort()];
+const fmt = (x: number): string => (x < 1e-3 ? x.toExponential(1) : x.toFixed(4));
+const summary: Record<string, Summary> = {};
+// Layout [bin][multipole] with one value per configuration.
+const at = (a: Float64Array, b: number, m: number): number => a[b * multipoles.length + m];
+
+for (const boxSize of boxes) {
+  const exact = exactAverage(boxSize);
+  console.log(`\n### L = ${boxSize} Mpc/h (${nB} bins; exact average ${exact.fromCache ? 'read from the cache; it took' : 'took'} ${exact.seconds.toFixed(0)} s wall)\n`);
+  for (const [m, label] of [
+    [0, 'B_0'],
+    [1, 'B_2'],
+  ] as const) {
+    console.log(`${label}: |approximation/exact - 1|, rms / median / 90th percentile / max${m === 1 ? ' (bins with |B_2| > 0.05 |B_0| only)' : ''}\n`);
+    console.log('| shape class | bins | centres | effective | continuous |');
+    console.log('| --- | --- | --- | --- | --- |');
+    for (const cls of classNames) {
+      const members = [...Array(nB).keys()].filter(
+        (b) => (cls === 'all' || shape[b] === cls) && (m === 0 || Math.abs(at(exact.values, b, 1)) > 0.05 * Math.abs(at(exact.values, b, 0))),
+      );
+      if (members.length === 0) continue;
+      const cells = Object.entries(approximations).map(([name, a]) => {
+        const s = summarise(members.map((b) => Math.abs(at(a, b, m) / at(exact.values, b, m) - 1)));
+        summary[`L${boxSize} ${label} ${cls} ${name}`] = s;
+        return `${fmt(s.rms)} / ${fmt(s.median)} / ${fmt(s.p90)} / ${fmt(s.max)}`;
+      });
+      console.log(`| ${cls} | ${members.length} | ${cells.join(' | ')} |`);
+    }
+    console.log('');
+  }
+}
+console.error(JSON.stringify(summary));
