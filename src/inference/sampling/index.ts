@@ -16,3 +16,4 @@ export * from './sidecar.js';
 export * from './progress-display.js';
 export * from './open-evaluator.js';
 export * from './sampling-checkpoint.js';
+export * from './module-locations.js';

@@ -9,7 +9,7 @@ import type { ModeClimb } from '../optimize/climb-from-start.js';
 import type { LogPosteriorReference } from './log-posterior-reference.js';
 import type { BoundedParameter } from './sampled-parameter.js';
 import type { SamplingWorkerApi } from './worker-entry.js';
-import { samplingWorkerEntry } from './worker-entry-location.js';
+import { samplingWorkerEntry } from './module-locations.js';
 
 const tsxBootstrap =
   "import('tsx/esm/api').then(({ register }) => { register(); return import(require('node:worker_threads').workerData.entry); });";
