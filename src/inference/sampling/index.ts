@@ -17,3 +17,4 @@ export * from './progress-display.js';
 export * from './open-evaluator.js';
 export * from './sampling-checkpoint.js';
 export * from './module-locations.js';
+export * from './sampled-parameters-from-priors.js';
