@@ -71,11 +71,10 @@ const bench: Benchmark = {
     const dir = mkdtempSync(join(tmpdir(), 'treble-likelihood-bench-'));
     try {
       writeBenchBundle(dir);
+      const common = { bundle: dir, covariance: { source: 'gaussian' }, models };
       const template = createJointLikelihood({
-        bundle: dir,
-        covariance: { source: 'gaussian' },
+        ...common,
         cosmology: { mode: 'fixed-template' },
-        models,
         parameters: {
           b1: { prior: { kind: 'uniform', min: 0.5, max: 4 }, start: 2 },
           fsigma8: { prior: { kind: 'uniform', min: 0.1, max: 1 }, start: 0.45 },
@@ -86,10 +85,8 @@ const bench: Benchmark = {
         },
       });
       const full = createJointLikelihood({
-        bundle: dir,
-        covariance: { source: 'gaussian' },
+        ...common,
         cosmology: { mode: 'full' },
-        models,
         parameters: {
           h: { prior: { kind: 'uniform', min: 0.6, max: 0.75 }, start: 0.6736 },
           omegaB: { value: 0.02237 },

@@ -1,5 +1,5 @@
-import type { MeasuredEntry } from '../data-vector.js';
-import { shellModeAverage, type ModeCountSource } from './mode-counts.js';
+import type { PowerCovarianceInputs } from './gaussian-power-covariance.js';
+import { shellModeAverage } from './mode-counts.js';
 
 /**
  * Leading non-Gaussian cross-covariance of the power monopole and the
@@ -9,16 +9,8 @@ import { shellModeAverage, type ModeCountSource } from './mode-counts.js';
  * [k - dk/2, k + dk/2). It follows from pairing one |delta_k|^2 of P with one
  * side of B (both k and -k give one pairing each). Other multipoles: zero.
  */
-export interface CrossCovarianceInputs {
-  readonly entries: readonly MeasuredEntry[];
-  readonly theory: Float64Array;
-  /** Noise added to the model power: 1/nbar, or 0 when the model already holds it. */
-  readonly shotNoise: number;
-  readonly dk: number;
-  readonly volume: number;
-  readonly boxSize: number | undefined;
-  readonly modeCounts: ModeCountSource;
-}
+/** The same inputs as the Gaussian power covariance (the model vector holds P0 and B0). */
+export type CrossCovarianceInputs = PowerCovarianceInputs;
 
 export function addPowerBispectrumCross(inp: CrossCovarianceInputs, out: Float64Array): void {
   const n = inp.entries.length;
