@@ -4,6 +4,7 @@
  */
 export * from './contracts/index.js';
 export * from './numerics/index.js';
+export * from './io/index.js';
 export * from './cosmology/index.js';
 export * from './perturbation/index.js';
 export * from './power/index.js';

@@ -1,0 +1,1 @@
+export * from './json-with-lines.js';
