@@ -20,3 +20,5 @@ export * from './lattice/index.js';
 export * from './user-triangles.js';
 export * from './shape-classes.js';
 export * from './tree-bispectrum-model.js';
+export * from './tabulated-spectrum.js';
+export * from './tree-multipole-evaluator.js';

@@ -7,9 +7,18 @@ import { checkMultipoles, exactPolynomialOrientationRule, orientationRule, type 
 import type { TriangleBins } from './triangle-bins.js';
 import type { TriangleNodeSet } from './triangle-node-set.js';
 import { combineTreeTemplates } from './tree-template-combination.js';
+import { TreeDirectIntegrand } from './tree-direct-integrand.js';
 import { TreeTemplateIntegrand } from './tree-template-integrand.js';
 import type { TreeBispectrumParameters } from './tree-template-terms.js';
-import { checkWavenumbersInTable, isOrientationPolynomial, resolveTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
+import { TabulatedSpectrum } from './tabulated-spectrum.js';
+import {
+  checkWavenumbersInTable,
+  isOrientationPolynomial,
+  resolveTreeSettings,
+  trueWavenumberRange,
+  type ResolvedTreeSettings,
+  type TreeBispectrumSettings,
+} from './tree-settings.js';
 import { userTriangleNodes } from './user-triangles.js';
 
 export const BIN_AVERAGING_METHODS = ['centres', 'effective', 'continuous'] as const;
@@ -28,6 +37,8 @@ export interface TreeBispectrumModelOptions extends TreeBispectrumSettings {
   readonly orientationNodes?: { readonly mu: number; readonly phi: number };
   /** Gauss–Legendre order of the continuous bin average; default DEFAULT_VOLUME_ORDER. */
   readonly volumeOrder?: number;
+  /** Re-tabulate the spectrum on a fine grid for fast lookups (TabulatedSpectrum); default true. */
+  readonly tabulateSpectrum?: boolean;
 }
 
 /** Parameter names the model reads (docs/conventions.md, "Bispectrum"). */
@@ -40,6 +51,18 @@ export function parseBinAveraging(name: string, where = 'averaging'): BinAveragi
   const hit = BIN_AVERAGING_METHODS.find((m) => m === name);
   if (!hit) throw new InputError(`${where}: unknown bin averaging "${name}" (known: ${BIN_AVERAGING_METHODS.join(', ')})`);
   return hit;
+}
+
+/**
+ * Default orientation nodes: exact for the polynomial model (no damping, no AP,
+ * no IR resummation); 4 x 5 with IR resummation alone and 4 x 6 with damping or
+ * AP, which reach 1e-7 relative on B_0 and B_2 (tests/bispectrum/orientation-convergence.test.ts).
+ */
+export function defaultTreeOrientationRule(s: ResolvedTreeSettings, lMax: number): OrientationRule {
+  if (isOrientationPolynomial(s)) return exactPolynomialOrientationRule(lMax);
+  const mu = Math.max(DEFAULT_ORIENTATION_NODES.mu, Math.ceil((9 + lMax) / 4));
+  const irOnly = s.velocityDispersion === 0 && s.alphaPar === 1 && s.alphaPerp === 1;
+  return orientationRule(mu, irOnly ? DEFAULT_ORIENTATION_NODES.phi - 1 : DEFAULT_ORIENTATION_NODES.phi);
 }
 
 /**
@@ -59,6 +82,9 @@ export class TreeBispectrumModel implements StatisticModel {
   private readonly options: TreeBispectrumModelOptions;
   private readonly userRule: OrientationRule | undefined;
   private cacheKey = '';
+  private table: TabulatedSpectrum | undefined;
+  private readonly kLo: number;
+  private readonly kHi: number;
   private cachedTemplates: Float64Array | undefined;
 
   constructor(options: TreeBispectrumModelOptions) {
@@ -81,6 +107,11 @@ export class TreeBispectrumModel implements StatisticModel {
         method === 'centres' ? centreTriangleNodes(bins) : method === 'effective' ? effectiveTriangleNodes(bins, order) : continuousBinNodes(bins, order);
       for (let b = 0; b < bins.size; b++) labels.push(Array.from(bins.centres.subarray(3 * b, 3 * b + 3)));
     }
+    let lo = Infinity;
+    let hi = 0;
+    for (const side of [this.nodes.k1, this.nodes.k2, this.nodes.k3]) for (const x of side) (lo = Math.min(lo, x)), (hi = Math.max(hi, x));
+    this.kLo = lo;
+    this.kHi = hi;
     this.userRule = options.orientationNodes ? orientationRule(options.orientationNodes.mu, options.orientationNodes.phi) : undefined;
     this.entries = this.multipoles.flatMap((l) => labels.map((k) => ({ block: `B${l}`, k })));
     this.defaults = {
@@ -98,24 +129,38 @@ export class TreeBispectrumModel implements StatisticModel {
 
   /** Templates [bin][multipole][value] for the non-polynomial parameters in `params`. */
   templates(params: ParameterValues = {}): Float64Array {
-    const [alphaPar, alphaPerp, sigma] = NON_POLYNOMIAL.map((n) => params[n] ?? this.defaults[n]);
-    const key = `${alphaPar}|${alphaPerp}|${sigma}`;
+    const key = NON_POLYNOMIAL.map((n) => params[n] ?? this.defaults[n]).join('|');
     if (this.cachedTemplates && key === this.cacheKey) return this.cachedTemplates;
-    const settings = resolveTreeSettings({ ...this.options, alphaPar, alphaPerp, velocityDispersion: sigma });
-    const k = this.nodes;
-    let lo = Infinity;
-    let hi = 0;
-    for (const side of [k.k1, k.k2, k.k3]) for (const x of side) (lo = Math.min(lo, x)), (hi = Math.max(hi, x));
-    checkWavenumbersInTable(settings, lo, hi, 'bispectrum model');
-    const lMax = Math.max(...this.multipoles);
-    const rule =
-      this.userRule ??
-      (isOrientationPolynomial(settings)
-        ? exactPolynomialOrientationRule(lMax)
-        : orientationRule(Math.max(DEFAULT_ORIENTATION_NODES.mu, Math.ceil((9 + lMax) / 4)), DEFAULT_ORIENTATION_NODES.phi));
-    this.cachedTemplates = averageOverTriangleNodes(k, new TreeTemplateIntegrand(settings), this.multipoles, rule);
+    const { settings, rule } = this.prepare(params);
+    this.cachedTemplates = averageOverTriangleNodes(this.nodes, new TreeTemplateIntegrand(settings), this.multipoles, rule);
     this.cacheKey = key;
     return this.cachedTemplates;
+  }
+
+  /** The direct path: B_l from TreeDirectIntegrand on the same nodes, rule and spectrum (layout of evaluate). */
+  evaluateDirect(params: ParameterValues): Float64Array {
+    const { settings, rule } = this.prepare(params);
+    const avg = averageOverTriangleNodes(this.nodes, new TreeDirectIntegrand(settings, this.polynomialParameters(params)), this.multipoles, rule);
+    const nb = this.nodes.binCount;
+    const nm = this.multipoles.length;
+    const out = new Float64Array(nb * nm);
+    for (let b = 0; b < nb; b++) for (let m = 0; m < nm; m++) out[m * nb + b] = avg[b * nm + m];
+    return out;
+  }
+
+  private prepare(params: ParameterValues): { settings: ResolvedTreeSettings; rule: OrientationRule } {
+    const [alphaPar, alphaPerp, sigma] = NON_POLYNOMIAL.map((n) => params[n] ?? this.defaults[n]);
+    const settings = resolveTreeSettings({ ...this.options, alphaPar, alphaPerp, velocityDispersion: sigma });
+    checkWavenumbersInTable(settings, this.kLo, this.kHi, 'bispectrum model');
+    const rule = this.userRule ?? defaultTreeOrientationRule(settings, Math.max(...this.multipoles));
+    if (this.options.tabulateSpectrum === false) return { settings, rule };
+    const [qLo, qHi] = trueWavenumberRange(settings, this.kLo, this.kHi);
+    if (!this.table || qLo < this.table.kMin || qHi > this.table.kMax) {
+      // Re-tabulate with room for moderate AP changes before the next re-tabulation.
+      const src = settings.spectrum;
+      this.table = new TabulatedSpectrum(src, Math.max(src.kMin, qLo / 1.1), Math.min(src.kMax, qHi * 1.1));
+    }
+    return { settings: { ...settings, spectrum: this.table }, rule };
   }
 
   evaluate(params: ParameterValues, out?: Float64Array): Float64Array {

@@ -13,6 +13,9 @@ const MAX_INDEX = 1 << 20;
 
 export function latticeMemoisedSpectrum(spectrum: LinearSpectrum, boxSize: number): LinearSpectrum {
   const kf = (2 * Math.PI) / boxSize;
+  // Four slots per index: an integrand may hand over k times a factor that is
+  // 1 only up to rounding (e.g. an AP stretch at alpha = 1), so the same lattice
+  // wavenumber arrives as a few neighbouring doubles. Each is kept exactly.
   const memo = (fn: (k: number) => number): ((k: number) => number) => {
     let keys = new Float64Array(0);
     let values = new Float64Array(0);
@@ -20,8 +23,8 @@ export function latticeMemoisedSpectrum(spectrum: LinearSpectrum, boxSize: numbe
       const x = k / kf;
       const a = Math.round(x * x);
       if (!(a < MAX_INDEX)) return fn(k);
-      if (a >= keys.length) {
-        const size = Math.min(MAX_INDEX, Math.max(2 * keys.length, a + 1, 1024));
+      if (4 * a >= keys.length) {
+        const size = 4 * Math.min(MAX_INDEX, Math.max(keys.length / 2, a + 1, 1024));
         const grownKeys = new Float64Array(size).fill(Number.NaN);
         grownKeys.set(keys);
         const grownValues = new Float64Array(size);
@@ -29,10 +32,13 @@ export function latticeMemoisedSpectrum(spectrum: LinearSpectrum, boxSize: numbe
         keys = grownKeys;
         values = grownValues;
       }
-      if (keys[a] === k) return values[a];
+      const slot = 4 * a;
+      for (let w = slot; w < slot + 4; w++) if (keys[w] === k) return values[w];
       const v = fn(k);
-      keys[a] = k;
-      values[a] = v;
+      let free = slot;
+      while (free < slot + 3 && keys[free] === keys[free]) free++; // first NaN slot, else the last
+      keys[free] = k;
+      values[free] = v;
       return v;
     };
   };

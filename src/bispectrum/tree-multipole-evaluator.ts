@@ -1,0 +1,179 @@
+import { kernelF2, kernelG2, kernelGalileonTidal } from '../perturbation/kernels.js';
+import { averageOverTriangleNodes } from './orientation-average.js';
+import { multipoleWeights, type OrientationRule } from './orientation-rule.js';
+import { TabulatedSpectrum } from './tabulated-spectrum.js';
+import type { TriangleNodeSet } from './triangle-node-set.js';
+import { TreeDirectIntegrand } from './tree-direct-integrand.js';
+import type { TreeBispectrumParameters } from './tree-template-terms.js';
+import { checkWavenumbersInTable, resolveTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
+
+/**
+ * Full evaluation of B_l on a fixed geometry (bin nodes, orientation rule,
+ * multipoles) for a new linear spectrum and parameters: the direct path made
+ * fast. Geometry that does not depend on cosmology (cosines between the sides,
+ * F2, G2 and sigma^2 of each pair at each node, Legendre weights) is built once
+ * in the constructor. Per evaluation the spectrum is re-tabulated
+ * (TabulatedSpectrum) and, without AP distortion, P_nw and the damped-at-mu=0
+ * wiggle of each side are looked up once per node; the orientation loop only
+ * adds the mu-dependent part of the BAO damping,
+ *   exp(-k^2 Sigma_tot^2(mu)) = exp(-k^2 Sigma^2) exp(-k^2 mu^2 [a + c mu^2]),
+ *   a = f (2 + f) Sigma^2 - f^2 delta Sigma^2, c = f^2 delta Sigma^2
+ * (ir-resummed-power.ts), the kernels' mu terms and the fingers-of-god factor.
+ * With AP distortion the wavenumbers change with orientation and it falls back
+ * to the generic average of TreeDirectIntegrand on the tabulated spectrum.
+ * Output layout [multipole][bin], as combineTreeTemplates.
+ */
+export class TreeMultipoleEvaluator {
+  readonly nodes: TriangleNodeSet;
+  readonly multipoles: readonly number[];
+  readonly rule: OrientationRule;
+  private readonly weights: Float64Array;
+  /** Per node: cos and sin of the angle between sides 1 and 2. */
+  private readonly cos12: Float64Array;
+  private readonly sin12: Float64Array;
+  /** Per node, pairs (12, 23, 31): F2, G2, sigma^2 — 9 values. */
+  private readonly pairKernels: Float64Array;
+  private readonly kLo: number;
+  private readonly kHi: number;
+
+  constructor(nodes: TriangleNodeSet, multipoles: readonly number[], rule: OrientationRule) {
+    this.nodes = nodes;
+    this.multipoles = multipoles;
+    this.rule = rule;
+    this.weights = multipoleWeights(rule, multipoles);
+    const n = nodes.k1.length;
+    this.cos12 = new Float64Array(n);
+    this.sin12 = new Float64Array(n);
+    this.pairKernels = new Float64Array(9 * n);
+    let lo = Infinity;
+    let hi = 0;
+    for (let i = 0; i < n; i++) {
+      const k = [nodes.k1[i], nodes.k2[i], nodes.k3[i]];
+      for (let p = 0; p < 3; p++) {
+        const a = k[p];
+        const b = k[(p + 1) % 3];
+        const c = k[(p + 2) % 3];
+        const cab = Math.min(1, Math.max(-1, (c * c - a * a - b * b) / (2 * a * b)));
+        if (p === 0) {
+          this.cos12[i] = cab;
+          this.sin12[i] = Math.sqrt(1 - cab * cab);
+        }
+        this.pairKernels[9 * i + 3 * p] = kernelF2(a, b, cab);
+        this.pairKernels[9 * i + 3 * p + 1] = kernelG2(a, b, cab);
+        this.pairKernels[9 * i + 3 * p + 2] = kernelGalileonTidal(cab);
+        lo = Math.min(lo, a);
+        hi = Math.max(hi, a);
+      }
+    }
+    this.kLo = lo;
+    this.kHi = hi;
+  }
+
+  evaluate(settings: TreeBispectrumSettings, params: TreeBispectrumParameters): Float64Array {
+    const s0 = resolveTreeSettings(settings);
+    checkWavenumbersInTable(s0, this.kLo, this.kHi, 'bispectrum evaluation');
+    const aMin = Math.min(s0.alphaPar, s0.alphaPerp);
+    const aMax = Math.max(s0.alphaPar, s0.alphaPerp);
+    const tab = new TabulatedSpectrum(s0.spectrum, this.kLo / aMax, this.kHi / aMin);
+    const s = { ...s0, spectrum: tab };
+    const nb = this.nodes.binCount;
+    const nm = this.multipoles.length;
+    if (s.alphaPar !== 1 || s.alphaPerp !== 1) {
+      const avg = averageOverTriangleNodes(this.nodes, new TreeDirectIntegrand(s, params), this.multipoles, this.rule);
+      const out = new Float64Array(nb * nm);
+      for (let b = 0; b < nb; b++) for (let m = 0; m < nm; m++) out[m * nb + b] = avg[b * nm + m];
+      return out;
+    }
+    return this.undistorted(tab, s.irResummation, s.fForBaoDamping, s.velocityDispersion, s.inverseDensity, params);
+  }
+
+  private undistorted(
+    tab: TabulatedSpectrum,
+    ir: boolean,
+    fd: number,
+    sigmaV: number,
+    n1: number,
+    p: TreeBispectrumParameters,
+  ): Float64Array {
+    const { k1: K1, k2: K2, k3: K3, weight, start, binCount } = this.nodes;
+    const nm = this.multipoles.length;
+    const out = new Float64Array(binCount * nm);
+    const { mu1: M1, sinMu1, cosPhi } = this.rule;
+    const nOrient = M1.length;
+    const wl = this.weights;
+    const { b1, b2, bG2, f } = p;
+    const sig2 = tab.sigma2BAO;
+    const dsig2 = tab.deltaSigma2BAO;
+    const aIR = fd * (2 + fd) * sig2 - fd * fd * dsig2;
+    const cIR = fd * fd * dsig2;
+    const halfSv2 = 0.5 * sigmaV * sigmaV;
+    const stochConst = p.bispShotConst * n1 * n1;
+    const stochP = p.bispShotPower * n1 * b1;
+    const acc = new Float64Array(nm);
+    for (let bin = 0; bin < binCount; bin++) {
+      acc.fill(0);
+      for (let i = start[bin]; i < start[bin + 1]; i++) {
+        const k1 = K1[i];
+        const k2 = K2[i];
+        const k3 = K3[i];
+        const c12 = this.cos12[i];
+        const s12 = this.sin12[i];
+        const pk = this.pairKernels;
+        const o9 = 9 * i;
+        // Side powers: no-wiggle part and wiggle damped by exp(-k^2 Sigma^2).
+        const n1k = tab.powerNoWiggle(k1);
+        const n2k = tab.powerNoWiggle(k2);
+        const n3k = tab.powerNoWiggle(k3);
+        const w1k = ir ? tab.powerWiggle(k1) * Math.exp(-k1 * k1 * sig2) : tab.powerWiggle(k1);
+        const w2k = ir ? tab.powerWiggle(k2) * Math.exp(-k2 * k2 * sig2) : tab.powerWiggle(k2);
+        const w3k = ir ? tab.powerWiggle(k3) * Math.exp(-k3 * k3 * sig2) : tab.powerWiggle(k3);
+        const wn = weight[i];
+        for (let o = 0; o < nOrient; o++) {
+          const m1 = M1[o];
+          const m2 = m1 * c12 - sinMu1[o] * s12 * cosPhi[o];
+          const m3 = -(k1 * m1 + k2 * m2) / k3;
+          const q1 = m1 * m1;
+          const q2 = m2 * m2;
+          const q3 = m3 * m3;
+          const P1 = ir ? n1k + w1k * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : n1k + w1k;
+          const P2 = ir ? n2k + w2k * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : n2k + w2k;
+          const P3 = ir ? n3k + w3k * Math.exp(-k3 * k3 * q3 * (aIR + cIR * q3)) : n3k + w3k;
+          const z1 = b1 + f * q1;
+          const z2 = b1 + f * q2;
+          const z3 = b1 + f * q3;
+          // Z2 of each pair (Scoccimarro, Couchman & Frieman 1999, eq. 13); the sum vector of pair (a, b) is -k_c.
+          const zz12 = pairZ2(b1, b2, bG2, f, pk[o9], pk[o9 + 1], pk[o9 + 2], k1, k2, m1, m2, q1, q2, q3);
+          const zz23 = pairZ2(b1, b2, bG2, f, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5], k2, k3, m2, m3, q2, q3, q1);
+          const zz31 = pairZ2(b1, b2, bG2, f, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8], k3, k1, m3, m1, q3, q1, q2);
+          let b = 2 * (z1 * z2 * zz12 * P1 * P2 + z2 * z3 * zz23 * P2 * P3 + z3 * z1 * zz31 * P3 * P1);
+          if (sigmaV > 0) b *= Math.exp(-halfSv2 * (k1 * k1 * q1 + k2 * k2 * q2 + k3 * k3 * q3));
+          b += stochP * (z1 * P1 + z2 * P2 + z3 * P3) + stochConst;
+          for (let m = 0; m < nm; m++) acc[m] += wn * wl[o * nm + m] * b;
+        }
+      }
+      for (let m = 0; m < nm; m++) out[m * binCount + bin] = acc[m];
+    }
+    return out;
+  }
+}
+
+/** Z2(k_a, k_b) from precomputed F2, G2, sigma^2 and the cosines (mu_ab^2 of the sum = mu_c^2). */
+function pairZ2(
+  b1: number,
+  b2: number,
+  bG2: number,
+  f: number,
+  F: number,
+  G: number,
+  S: number,
+  ka: number,
+  kb: number,
+  ma: number,
+  mb: number,
+  qa: number,
+  qb: number,
+  qc: number,
+): number {
+  const muK = ma * ka + mb * kb;
+  return b1 * F + f * qc * G + 0.5 * f * muK * ((ma / ka) * (b1 + f * qb) + (mb / kb) * (b1 + f * qa)) + 0.5 * b2 + bG2 * S;
+}
