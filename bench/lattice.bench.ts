@@ -16,12 +16,12 @@ const bench: Benchmark = {
   name: 'lattice',
   async run() {
     const bins = enumerateTriangleBins(shellGrid(0.01, 0.15, 0.01));
-    const integrand = studyTemplateIntegrand();
     const boxes = process.env.TREBLE_BENCH_LATTICE_QUICK ? [1000] : [1000, 2000];
     const cacheDir = mkdtempSync(join(tmpdir(), 'treble-lattice-bench-'));
-    const results: Record<string, unknown> = { bins: bins.size, integrandSize: integrand.size, multipoles: [0, 2] };
+    const results: Record<string, unknown> = { bins: bins.size, integrandSize: studyTemplateIntegrand().size, multipoles: [0, 2] };
     try {
       for (const boxSize of boxes) {
+        const integrand = studyTemplateIntegrand(boxSize);
         const cpu0 = process.cpuUsage();
         const first = discreteBoxBinAverage(bins, boxSize, integrand, { cacheDir });
         const cpu = process.cpuUsage(cpu0);

@@ -5,13 +5,12 @@
  * 0.01-0.10 h/Mpc, boxes L = 1000, 2000, 3000 Mpc/h. Prints markdown tables of
  * |approximation / exact - 1| by shape class (docs/bispectrum-bin-averaging.md).
  *
- *   npx tsx scripts/lattice-accuracy-study.ts [L ...]        tables
- *   npx tsx scripts/lattice-accuracy-study.ts --part L top   exact average of the bins whose
- *                                                            first shell is the top one (or
- *                                                            `rest`) only, into the cache
+ *   npx tsx scripts/lattice-accuracy-study.ts [--max-first-shell N] [L ...]   tables
+ *   npx tsx scripts/lattice-accuracy-study.ts --part L G   exact average of part G only, into the cache
  * The exact averages are cached by bin list (src/bispectrum/lattice/lattice-cache.ts),
- * always for the same two parts (first shell on top / the rest), which two
- * processes can compute side by side.
+ * always for the same parts (bins grouped by first shell: 0-7, 8, 9), which
+ * separate processes can compute side by side. --max-first-shell N limits the
+ * tables to bins whose first shell is at most N (parts above N are not needed).
  */
 import { averageAtBinCentres, averageAtEffectiveWavenumbers, averageOverBinVolume } from '../src/bispectrum/bin-averaging.js';
 import { discreteBoxBinAverage } from '../src/bispectrum/lattice/discrete-box-average.js';
@@ -24,20 +23,27 @@ const bins = enumerateTriangleBins(shellGrid(0.01, 0.1, 0.01));
 const nB = bins.size;
 const top = bins.shells.count - 1;
 
-function part(which: 'top' | 'rest'): { sub: TriangleBins; members: number[] } {
-  const members = [...Array(nB).keys()].filter((b) => (bins.indices[3 * b] === top) === (which === 'top'));
+const PARTS: readonly (readonly number[])[] = [[0, 1, 2, 3, 4, 5, 6, 7], [8], [9]];
+
+function part(g: number): { sub: TriangleBins; members: number[] } {
+  const members = [...Array(nB).keys()].filter((b) => PARTS[g].includes(bins.indices[3 * b]));
   const indices = Int32Array.from(members.flatMap((b) => [...bins.indices.subarray(3 * b, 3 * b + 3)]));
   const centres = Float64Array.from(members.flatMap((b) => [...bins.centres.subarray(3 * b, 3 * b + 3)]));
   return { sub: { shells: bins.shells, size: members.length, indices, centres }, members };
 }
 
-/** Exact B_l [bin][multipole] of the whole binning, from the two parts. */
+const args = process.argv.slice(2);
+const limitAt = args.indexOf('--max-first-shell');
+const maxFirstShell = limitAt >= 0 ? Number(args.splice(limitAt, 2)[1]) : top;
+
+/** Exact B_l [bin][multipole] of the binning from its parts; NaN for bins beyond maxFirstShell. */
 function exactAverage(boxSize: number): { values: Float64Array; seconds: number; fromCache: boolean } {
-  const values = new Float64Array(nB * multipoles.length);
+  const values = new Float64Array(nB * multipoles.length).fill(Number.NaN);
   let seconds = 0;
   let fromCache = true;
-  for (const which of ['top', 'rest'] as const) {
-    const { sub, members } = part(which);
+  for (let g = 0; g < PARTS.length; g++) {
+    if (Math.max(...PARTS[g]) > maxFirstShell) continue;
+    const { sub, members } = part(g);
     const r = discreteBoxBinAverage(sub, boxSize, studyDirectIntegrand(boxSize), { multipoles });
     seconds += r.seconds;
     fromCache &&= r.fromCache;
@@ -46,15 +52,15 @@ function exactAverage(boxSize: number): { values: Float64Array; seconds: number;
   return { values, seconds, fromCache };
 }
 
-if (process.argv[2] === '--part') {
-  const boxSize = Number(process.argv[3]);
-  const which = process.argv[4] === 'top' ? 'top' : 'rest';
-  const r = discreteBoxBinAverage(part(which).sub, boxSize, studyDirectIntegrand(boxSize), { multipoles });
-  console.log(`L=${boxSize} part ${which}: ${r.fromCache ? 'cached' : 'computed'} in ${r.seconds.toFixed(1)} s`);
+if (args[0] === '--part') {
+  const boxSize = Number(args[1]);
+  const g = Number(args[2]);
+  const r = discreteBoxBinAverage(part(g).sub, boxSize, studyDirectIntegrand(boxSize), { multipoles });
+  console.log(`L=${boxSize} part ${g} (first shells ${PARTS[g].join(',')}): ${r.fromCache ? 'cached' : 'computed'} in ${r.seconds.toFixed(1)} s wall`);
   process.exit(0);
 }
 
-const boxes = process.argv.length > 2 ? process.argv.slice(2).map(Number) : [1000, 2000, 3000];
+const boxes = args.length > 0 ? args.map(Number) : [1000, 2000, 3000];
 const direct = studyDirectIntegrand();
 const approximations: Record<string, Float64Array> = {
   centres: averageAtBinCentres(bins, direct, { multipoles }),
@@ -85,7 +91,7 @@ const at = (a: Float64Array, b: number, m: number): number => a[b * multipoles.l
 
 for (const boxSize of boxes) {
   const exact = exactAverage(boxSize);
-  console.log(`\n### L = ${boxSize} Mpc/h (${nB} bins; exact average ${exact.fromCache ? 'read from the cache; it took' : 'took'} ${exact.seconds.toFixed(0)} s wall)\n`);
+  console.log(`\n### L = ${boxSize} Mpc/h (${[...Array(nB).keys()].filter((b) => bins.indices[3 * b] <= maxFirstShell).length} bins, c1 <= ${(0.01 * (maxFirstShell + 1)).toFixed(2)}; exact average ${exact.fromCache ? 'read from the cache; it took' : 'took'} ${exact.seconds.toFixed(0)} s wall)\n`);
   for (const [m, label] of [
     [0, 'B_0'],
     [1, 'B_2'],
@@ -95,7 +101,7 @@ for (const boxSize of boxes) {
     console.log('| --- | --- | --- | --- | --- |');
     for (const cls of classNames) {
       const members = [...Array(nB).keys()].filter(
-        (b) => (cls === 'all' || shape[b] === cls) && (m === 0 || Math.abs(at(exact.values, b, 1)) > 0.05 * Math.abs(at(exact.values, b, 0))),
+        (b) => bins.indices[3 * b] <= maxFirstShell && (cls === 'all' || shape[b] === cls) && (m === 0 || Math.abs(at(exact.values, b, 1)) > 0.05 * Math.abs(at(exact.values, b, 0))),
       );
       if (members.length === 0) continue;
       const cells = Object.entries(approximations).map(([name, a]) => {
