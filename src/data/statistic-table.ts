@@ -1,3 +1,4 @@
+import type { TriangleBins } from '../bispectrum/triangle-bins.js';
 import { InputError } from '../contracts/input-error.js';
 import { cellWhere, tableColumn, type NumericTable } from './csv-table.js';
 
@@ -119,4 +120,18 @@ export function checkSameBins(reference: StatisticTable, other: StatisticTable):
       throw new InputError(`${other.file}: bin ${Math.floor(i / reference.sides) + 1} has other centres than in ${reference.file}`, { where: other.file });
     }
   }
+}
+
+/** Smallest bin centre of a table (the first shell of its grid). */
+export function firstCentre(t: StatisticTable): number {
+  let c = Infinity;
+  for (const v of t.centres) c = Math.min(c, v);
+  return c;
+}
+
+/** The triangle bins of a bispectrum table, on its own shell grid (src/bispectrum/triangle-bins.ts). */
+export function triangleBinsOf(t: StatisticTable): TriangleBins {
+  let top = 0;
+  for (const s of t.shells) top = Math.max(top, s);
+  return { shells: { kMin: firstCentre(t), dk: t.dk, count: top + 1 }, size: t.size, indices: Int32Array.from(t.shells), centres: Float64Array.from(t.centres) };
 }

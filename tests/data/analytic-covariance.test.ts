@@ -9,6 +9,7 @@ import type { MeasuredEntry } from '../../src/data/data-vector.js';
 import { loadMeasurementBundle } from '../../src/data/measurement-bundle.js';
 import { selectData } from '../../src/data/scale-cuts.js';
 import { fixtures } from '../inference/likelihood/support/scipy-fixtures.js';
+import { latticeShell } from '../../src/numerics/lattice-shell.js';
 import { baseBundle, withMocks, writeBundle } from './support/write-bundle.js';
 
 describe('analytic Gaussian covariance pieces', () => {
@@ -59,6 +60,32 @@ describe('covariance choices', () => {
     // Shot noise in the model (default): P0 enters as it is.
     const inTheory = prepareCovariance({ ...o, crossPowerBispectrum: 'leading' }, { bundle, selection: all, theory, freeParameters: 3 });
     expect(inTheory.matrix[p * n + t]).toBeCloseTo((2 * theory[p] * theory[t] * 3) / nk, 6);
+  });
+
+  it('takes the exact lattice triangle counts of the box on request (brute-force enumeration of the box vectors)', () => {
+    const measured = prepareCovariance({ source: 'gaussian' }, { bundle, selection: all, theory, freeParameters: 0 });
+    const lattice = prepareCovariance({ source: 'gaussian', triangleCounts: 'lattice' }, { bundle, selection: all, theory, freeParameters: 0 });
+    const n = 20;
+    // Ordered triples q1 + q2 + q3 = 0 with q_a in the half-open shells of the bin, by brute force.
+    const count = (k: number[]) => {
+      const shells = k.map((c) => latticeShell(1000, c - 0.01, c + 0.01));
+      const third = new Set<string>();
+      for (let v = 0; v < shells[2].count; v++) third.add(String([0, 1, 2].map((a) => shells[2].vectors[3 * v + a])));
+      let total = 0;
+      for (let a = 0; a < shells[0].count; a++) {
+        for (let b = 0; b < shells[1].count; b++) {
+          const q3 = [0, 1, 2].map((c) => -shells[0].vectors[3 * a + c] - shells[1].vectors[3 * b + c]);
+          if (third.has(String(q3))) total++;
+        }
+      }
+      return total;
+    };
+    for (const k of [[0.05, 0.05, 0.03], [0.07, 0.05, 0.03]]) {
+      const i = bundle.dataVector.entries.findIndex((e) => e.block === 'B0' && e.k.every((x, s) => Math.abs(x - k[s]) < 1e-9));
+      const e = bundle.dataVector.entries[i];
+      const latticeCount = (e.count * measured.matrix[i * n + i]) / lattice.matrix[i * n + i];
+      expect(latticeCount).toBeCloseTo(count(k), 6);
+    }
   });
 
   it('is cut with the data before it is factorised', () => {

@@ -1,6 +1,8 @@
 import { join } from 'node:path';
 import { InputError, InputErrors } from '../../contracts/input-error.js';
+import { latticeTriangleCounts } from '../../bispectrum/lattice/lattice-bin-average.js';
 import { LogLogSpline } from '../../numerics/cubic-spline.js';
+import { triangleBinsOf } from '../statistic-table.js';
 import type { MeasurementBundle } from '../measurement-bundle.js';
 import { loadBundleRealisations } from '../measurement-bundle.js';
 import { selectMatrix, type DataSelection } from '../scale-cuts.js';
@@ -79,7 +81,7 @@ export function validateCovarianceOptions(o: unknown): CovarianceOptions {
   if (v.source === 'mocks') oneOf('treatment', ['hartlap', 't-distribution'], true);
   if (v.source === 'gaussian') {
     oneOf('modeCounts', ['measured', 'continuous', 'lattice'], false);
-    oneOf('triangleCounts', ['measured', 'bin-volume'], false);
+    oneOf('triangleCounts', ['measured', 'bin-volume', 'lattice'], false);
     oneOf('crossPowerBispectrum', ['none', 'leading'], false);
     oneOf('shotNoise', ['in-theory', 'add'], false);
   }
@@ -118,12 +120,17 @@ function analyticGaussian(o: Extract<CovarianceOptions, { source: 'gaussian' }>,
   const n = entries.length;
   const modeCounts = o.modeCounts ?? 'measured';
   if (modeCounts === 'lattice' && metadata.boxSize === undefined) throw new InputError('covariance.modeCounts "lattice" needs a periodic box (boxSize in the bundle)', { where: 'covariance.modeCounts' });
+  const triangleCounts = o.triangleCounts ?? 'measured';
+  if (triangleCounts === 'lattice' && metadata.boxSize === undefined) throw new InputError('covariance.triangleCounts "lattice" needs a periodic box (boxSize in the bundle)', { where: 'covariance.triangleCounts' });
   const shotNoise = o.shotNoise === 'add' ? 1 / metadata.numberDensity : 0;
   const common = { entries, theory, shotNoise, volume: metadata.volume, boxSize: metadata.boxSize };
   const out = new Float64Array(n * n);
   if (bundle.power) addGaussianPowerCovariance({ ...common, dk: bundle.power.dk, modeCounts }, out);
   if (bundle.bispectrum) {
-    addGaussianBispectrumVariance({ ...common, dk: bundle.bispectrum.dk, monopoleAt: monopoleFromTheory(ctx, theory), triangleCounts: o.triangleCounts ?? 'measured' }, out);
+    const latticeCounts = triangleCounts === 'lattice' ? latticeTriangleCounts(triangleBinsOf(bundle.bispectrum), metadata.boxSize as number) : undefined;
+    const empty = latticeCounts?.findIndex((c) => !(c > 0)) ?? -1;
+    if (empty >= 0) throw new InputError(`covariance: triangle bin ${empty + 1} of ${bundle.bispectrum.file} has no lattice triangles in the box`, { where: 'covariance.triangleCounts' });
+    addGaussianBispectrumVariance({ ...common, dk: bundle.bispectrum.dk, monopoleAt: monopoleFromTheory(ctx, theory), triangleCounts, latticeCounts }, out);
     if (bundle.power && o.crossPowerBispectrum === 'leading') addPowerBispectrumCross({ ...common, dk: bundle.power.dk, modeCounts }, out);
   }
   return out;

@@ -13,9 +13,11 @@ import { volumeFundamentalFrequency } from './mode-counts.js';
  * taken as uncorrelated.
  *   measured triangle counts: N_tri from the bundle table;
  *   bin-volume: N_tri = 8 pi^2 c1 c2 c3 dk^3 / k_f^6, halved on the closure edge
- *   c1 = c2 + c3 where only about half of the bin volume closes.
+ *   c1 = c2 + c3 where only about half of the bin volume closes;
+ *   lattice: the ordered triples of the periodic box (src/bispectrum/lattice), given in
+ *   `latticeCounts` per table bin.
  */
-export type TriangleCountSource = 'measured' | 'bin-volume';
+export type TriangleCountSource = 'measured' | 'bin-volume' | 'lattice';
 
 export function symmetryFactor(shells: readonly number[]): number {
   const [i, j, l] = shells;
@@ -40,10 +42,14 @@ export interface BispectrumVarianceInputs {
   readonly volume: number;
   readonly boxSize: number | undefined;
   readonly triangleCounts: TriangleCountSource;
+  /** Lattice counts per bispectrum-table bin, for triangleCounts "lattice". */
+  readonly latticeCounts?: Float64Array;
 }
 
 export function triangleCount(inp: BispectrumVarianceInputs, e: MeasuredEntry): number {
-  return inp.triangleCounts === 'measured' ? e.count : binVolumeTriangleCount(e.k, inp.dk, volumeFundamentalFrequency(inp.volume, inp.boxSize));
+  if (inp.triangleCounts === 'measured') return e.count;
+  if (inp.triangleCounts === 'lattice') return inp.latticeCounts?.[e.bin] ?? Number.NaN;
+  return binVolumeTriangleCount(e.k, inp.dk, volumeFundamentalFrequency(inp.volume, inp.boxSize));
 }
 
 export function addGaussianBispectrumVariance(inp: BispectrumVarianceInputs, out: Float64Array): void {

@@ -2,9 +2,8 @@ import { InputError } from '../../contracts/input-error.js';
 import type { LinearSpectrum } from '../../contracts/linear-spectrum.js';
 import type { StatisticModel } from '../../contracts/statistic-model.js';
 import { TreeBispectrumModel, type BinAveragingMethod } from '../../bispectrum/tree-bispectrum-model.js';
-import type { TriangleBins } from '../../bispectrum/triangle-bins.js';
 import type { MeasurementBundle } from '../../data/measurement-bundle.js';
-import type { StatisticTable } from '../../data/statistic-table.js';
+import { firstCentre, triangleBinsOf } from '../../data/statistic-table.js';
 import type { PowerBinAveraging } from '../../power/bin-sampling.js';
 import { PowerMultipoleModel } from '../../power/power-multipole-model.js';
 import type { ModelsForSpectrum } from './model-source.js';
@@ -22,18 +21,6 @@ export interface BundleModelOptions {
     readonly irResummation?: boolean;
     readonly velocityDispersion?: number;
   };
-}
-
-function firstCentre(t: StatisticTable): number {
-  let c = Infinity;
-  for (const v of t.centres) c = Math.min(c, v);
-  return c;
-}
-
-function triangleBinsOf(t: StatisticTable): TriangleBins {
-  let top = 0;
-  for (const s of t.shells) top = Math.max(top, s);
-  return { shells: { kMin: firstCentre(t), dk: t.dk, count: top + 1 }, size: t.size, indices: Int32Array.from(t.shells), centres: Float64Array.from(t.centres) };
 }
 
 export function bundleModels(bundle: MeasurementBundle, options: BundleModelOptions = {}): ModelsForSpectrum {
