@@ -15,12 +15,14 @@ import type { TriangleNodeSet } from './triangle-node-set.js';
  *   k2 at k1 + b, |k1 - b| (and k1 when shell 3 starts at 0);
  *   k3 between max(lo3, |k1 - k2|) and min(hi3, k1 + k2).
  * A piece of relative width r = width / c3 (the triangle's shape varies on the
- * scale of its smallest side) gets `order` nodes when r >= 0.25 and one fewer
- * below (at least 3, or `order` when smaller): pieces that are narrow compared
- * with the smallest side need fewer nodes for the same accuracy.
+ * scale of its smallest side) gets order + 1 nodes when r >= 0.75, `order`
+ * when 0.25 <= r < 0.75 and order - 1 below (at least 3, or `order` when
+ * smaller): pieces narrow compared with the smallest side need fewer nodes for
+ * the same accuracy, the widest (lowest shells) more.
  */
 export function piecePoints(order: number, width: number, scale: number): number {
   const r = width / scale;
+  if (r >= 0.75) return order + 1;
   return r >= 0.25 ? order : Math.max(Math.min(3, order), order - 1);
 }
 

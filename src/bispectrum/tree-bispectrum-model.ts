@@ -54,15 +54,21 @@ export function parseBinAveraging(name: string, where = 'averaging'): BinAveragi
 }
 
 /**
- * Default orientation nodes: exact for the polynomial model (no damping, no AP,
- * no IR resummation); 4 x 5 with IR resummation alone and 4 x 6 with damping or
- * AP, which reach 1e-7 relative on B_0 and B_2 (tests/bispectrum/orientation-convergence.test.ts).
+ * Default orientation nodes for a 1e-6 relative target on B_0 and B_2: exact
+ * for the polynomial model (no damping, no AP, no IR resummation); 4 x 5 with
+ * IR resummation alone; with fingers-of-god damping or AP, 4 + e mu nodes and
+ * 6 + e phi nodes where e = max(0, ceil(3 sigma_v kMax) - 1) grows with the
+ * damping reached at the largest wavenumber kMax
+ * (tests/bispectrum/orientation-convergence.test.ts).
  */
-export function defaultTreeOrientationRule(s: ResolvedTreeSettings, lMax: number): OrientationRule {
+export function defaultTreeOrientationRule(s: ResolvedTreeSettings, lMax: number, kMax: number): OrientationRule {
   if (isOrientationPolynomial(s)) return exactPolynomialOrientationRule(lMax);
-  const mu = Math.max(DEFAULT_ORIENTATION_NODES.mu, Math.ceil((9 + lMax) / 4));
-  const irOnly = s.velocityDispersion === 0 && s.alphaPar === 1 && s.alphaPerp === 1;
-  return orientationRule(mu, irOnly ? DEFAULT_ORIENTATION_NODES.phi - 1 : DEFAULT_ORIENTATION_NODES.phi);
+  const minMu = Math.ceil((9 + lMax) / 4);
+  if (s.velocityDispersion === 0 && s.alphaPar === 1 && s.alphaPerp === 1) {
+    return orientationRule(Math.max(DEFAULT_ORIENTATION_NODES.mu, minMu), DEFAULT_ORIENTATION_NODES.phi - 1);
+  }
+  const e = Math.max(0, Math.ceil((3 * s.velocityDispersion * kMax) / Math.min(s.alphaPar, s.alphaPerp)) - 1);
+  return orientationRule(Math.max(DEFAULT_ORIENTATION_NODES.mu + e, minMu), DEFAULT_ORIENTATION_NODES.phi + e);
 }
 
 /**
@@ -152,7 +158,7 @@ export class TreeBispectrumModel implements StatisticModel {
     const [alphaPar, alphaPerp, sigma] = NON_POLYNOMIAL.map((n) => params[n] ?? this.defaults[n]);
     const settings = resolveTreeSettings({ ...this.options, alphaPar, alphaPerp, velocityDispersion: sigma });
     checkWavenumbersInTable(settings, this.kLo, this.kHi, 'bispectrum model');
-    const rule = this.userRule ?? defaultTreeOrientationRule(settings, Math.max(...this.multipoles));
+    const rule = this.userRule ?? defaultTreeOrientationRule(settings, Math.max(...this.multipoles), this.kHi);
     if (this.options.tabulateSpectrum === false) return { settings, rule };
     const [qLo, qHi] = trueWavenumberRange(settings, this.kLo, this.kHi);
     if (!this.table || qLo < this.table.kMin || qHi > this.table.kMax) {
