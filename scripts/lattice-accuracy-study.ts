@@ -14,9 +14,9 @@
  */
 import { averageAtBinCentres, averageAtEffectiveWavenumbers, averageOverBinVolume } from '../src/bispectrum/bin-averaging.js';
 import { discreteBoxBinAverage } from '../src/bispectrum/lattice/discrete-box-average.js';
+import { triangleShapeClasses } from '../src/bispectrum/shape-classes.js';
 import { enumerateTriangleBins, shellGrid, type TriangleBins } from '../src/bispectrum/triangle-bins.js';
 import { studyDirectIntegrand } from './lattice-study-model.js';
-import { studyShapeClass } from './lattice-study-shapes.js';
 
 const multipoles = [0, 2];
 const bins = enumerateTriangleBins(shellGrid(0.01, 0.1, 0.01));
@@ -82,7 +82,7 @@ function summarise(d: number[]): Summary {
   return { n: s.length, rms: Math.sqrt(s.reduce((a, x) => a + x * x, 0) / s.length), median: q(0.5), p90: q(0.9), max: s[s.length - 1] };
 }
 
-const shape = Array.from({ length: nB }, (_, n) => studyShapeClass(bins, n));
+const shape = triangleShapeClasses(bins); // the model's classes (src/bispectrum/shape-classes.ts)
 const classNames = ['all', ...[...new Set(shape)].sort()];
 const fmt = (x: number): string => (x < 1e-3 ? x.toExponential(1) : x.toFixed(4));
 const summary: Record<string, Summary> = {};
