@@ -10,6 +10,8 @@ import { linearPowerFromCosmology } from '../../../src/cosmology/linear-power-fr
 import { binVolumeTriangleCount, continuousModeCount } from '../../../src/data/index.js';
 import { writeMeasurementBundle } from '../../../src/data/write-measurement-bundle.js';
 import { createJointLikelihood, createJointLogPosterior } from '../../../src/inference/likelihood/joint-likelihood-options.js';
+import { loadLogPosterior } from '../../../src/inference/sampling/load-log-posterior.js';
+import { normalizeLogPosteriorReference } from '../../../src/inference/sampling/log-posterior-reference.js';
 import { PowerMultipoleModel } from '../../../src/power/power-multipole-model.js';
 
 // The likelihood with the project's own power and bispectrum models on a bundle
@@ -92,10 +94,13 @@ describe('likelihood with the power and bispectrum models on a bundle', () => {
     expect(at(1.9, fs8)).toBeGreaterThan(at(1.9, fs8 * 1.15) + 1);
   });
 
-  it('gives the sampler the same log-posterior from its JSON options', () => {
+  it('gives the sampler the same log-posterior from its JSON options, also through its module reference', async () => {
     const logPost = createJointLogPosterior(JSON.parse(JSON.stringify(templateOptions)));
     const theta = Float64Array.from([2.1, 0.4]);
     expect(logPost(theta)).toBe(L.logPosterior(theta));
+    const ref = normalizeLogPosteriorReference({ module: new URL('../../../src/inference/likelihood/joint-likelihood-options.ts', import.meta.url).href, exportName: 'createJointLogPosterior', options: templateOptions });
+    const loaded = await loadLogPosterior(ref);
+    expect(loaded(theta)).toBe(L.logPosterior(theta));
   });
 
   it('full mode: AP dilations from the bundle fiducial cosmology, 1 at the fiducial itself', () => {
