@@ -10,13 +10,13 @@ import { timeMedian, type Benchmark } from './harness.js';
  * Exact discrete-box average of the tree-level template integrand (17 values,
  * B_0 and B_2) for centres 0.01-0.15 h/Mpc, dk = 0.01 (477 bins), in boxes of
  * L = 1000 and 2000 Mpc/h: the first (uncached) computation, then a cached read.
- * TREBLE_BENCH_LATTICE_QUICK=1 skips L = 2000 (several minutes on one core).
+ * L = 2000 takes ~15-20 CPU minutes, so it runs only with TREBLE_BENCH_LATTICE_LARGE=1.
  */
 const bench: Benchmark = {
   name: 'lattice',
   async run() {
     const bins = enumerateTriangleBins(shellGrid(0.01, 0.15, 0.01));
-    const boxes = process.env.TREBLE_BENCH_LATTICE_QUICK ? [1000] : [1000, 2000];
+    const boxes = process.env.TREBLE_BENCH_LATTICE_LARGE ? [1000, 2000] : [1000];
     const cacheDir = mkdtempSync(join(tmpdir(), 'treble-lattice-bench-'));
     const results: Record<string, unknown> = { bins: bins.size, integrandSize: studyTemplateIntegrand().size, multipoles: [0, 2] };
     try {
