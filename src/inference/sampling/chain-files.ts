@@ -30,11 +30,16 @@ export function chainCsvHeader(memberLabel: string, names: readonly string[]): s
  * reading them back gives the same doubles.
  */
 export function chainCsvRows(history: ChainHistory, from: number, to: number): string {
-  const lines: string[] = [];
+  let text = '';
   for (let s = from; s < to; s++) {
-    for (let m = 0; m < history.members; m++) lines.push(`${s + 1},${m},${Array.from(history.row(s, m)).join(',')}`);
+    for (let m = 0; m < history.members; m++) {
+      const row = history.row(s, m);
+      let line = `${s + 1},${m}`;
+      for (let k = 0; k < row.length; k++) line += `,${row[k]}`;
+      text += `${line}\n`;
+    }
   }
-  return lines.length === 0 ? '' : `${lines.join('\n')}\n`;
+  return text;
 }
 
 /** Append text and flush it to disk. Returns the file's new byte length. */
