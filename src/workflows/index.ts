@@ -5,3 +5,6 @@ export * from './forecast/binning-bundle.js';
 export * from './forecast/bin-fisher-set.js';
 export * from './forecast/forecast-spec.js';
 export * from './forecast/run-forecast.js';
+export * from './scale-cuts/shape-class-chi2.js';
+export * from './scale-cuts/scan-selection.js';
+export * from './scale-cuts/scale-cut-scan.js';
