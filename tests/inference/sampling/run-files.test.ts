@@ -66,6 +66,16 @@ describe('chain file, sidecar and progress lines', () => {
     expect(more.steps).toBe(30);
   });
 
+  it('an abort signal ends a run on this thread with a final checkpoint', async () => {
+    const stem = join(mkdtempSync(join(tmpdir(), 'treble-files-')), 'run');
+    const r = await sampleEnsemble({ parameters, target, output: stem, seed: 5, walkers: 8, workers: 0, maxSteps: 10_000_000, tauMultiple: 1e9, progress: 'off', handleInterrupt: false, signal: AbortSignal.timeout(300) });
+    expect(r.stopReason).toBe('interrupted');
+    expect(r.steps).toBeGreaterThan(0);
+    const state = JSON.parse(readFileSync(`${stem}.state.json`, 'utf8')) as { steps: number; chainBytes: number };
+    expect(state.steps).toBe(r.steps);
+    expect(readFileSync(`${stem}.csv`).length).toBe(state.chainBytes);
+  });
+
   it('on a terminal the status line is redrawn in place', () => {
     const stream = new Capture();
     stream.isTTY = true;
