@@ -22,3 +22,4 @@ export * from './shape-classes.js';
 export * from './tree-bispectrum-model.js';
 export * from './tabulated-spectrum.js';
 export * from './tree-multipole-evaluator.js';
+export * from './bispectrum-csv.js';

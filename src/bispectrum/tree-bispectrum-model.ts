@@ -29,6 +29,8 @@ export interface TreeBispectrumModelOptions extends TreeBispectrumSettings {
   readonly bins?: TriangleBins;
   /** A user list of triangles (k1, k2, k3), evaluated as given. */
   readonly triangles?: readonly (readonly number[])[];
+  /** Name of the triangle list in error messages (a file name). */
+  readonly trianglesSource?: string;
   /** How bins are averaged; default 'continuous'. Ignored for `triangles`. */
   readonly averaging?: BinAveragingMethod;
   /** Even multipoles; default [0, 2]. */
@@ -103,7 +105,7 @@ export class TreeBispectrumModel implements StatisticModel {
     }
     const labels: number[][] = [];
     if (options.triangles !== undefined) {
-      this.nodes = userTriangleNodes(options.triangles);
+      this.nodes = userTriangleNodes(options.triangles, options.trianglesSource);
       options.triangles.forEach((t) => labels.push([...t]));
     } else {
       const bins = options.bins as TriangleBins;

@@ -16,12 +16,18 @@ describe('fast full evaluation (TreeMultipoleEvaluator)', () => {
   const rule = orientationRule(4, 6);
   const evaluator = new TreeMultipoleEvaluator(nodes, [0, 2], rule);
 
-  for (const extra of [{}, { velocityDispersion: 5 }, { irResummation: false }, { alphaPar: 1.03, alphaPerp: 0.98 }]) {
+  const cases: Record<string, number | boolean>[] = [{}, { velocityDispersion: 5 }, { irResummation: false }, { alphaPar: 1.03, alphaPerp: 0.98 }];
+  for (const extra of cases) {
     it(`agrees with the model's template path to 1e-10 (${JSON.stringify(extra)})`, () => {
       const settings = { spectrum, numberDensity: 2e-4, ...extra };
       const fast = evaluator.evaluate(settings, params);
       const model = new TreeBispectrumModel({ ...settings, bins, volumeOrder: 3, orientationNodes: { mu: 4, phi: 6 } });
-      const slow = model.evaluate({ ...params, ...extra, bispSigmaV: (extra as { velocityDispersion?: number }).velocityDispersion ?? 0 });
+      const slow = model.evaluate({
+        ...params,
+        alphaPar: (extra.alphaPar as number) ?? 1,
+        alphaPerp: (extra.alphaPerp as number) ?? 1,
+        bispSigmaV: (extra.velocityDispersion as number) ?? 0,
+      });
       for (let i = 0; i < fast.length; i++) expect(Math.abs(fast[i] / slow[i] - 1)).toBeLessThan(1e-10);
     });
   }
