@@ -15,3 +15,4 @@ export * from './field-file.js';
 export * from './particle-file.js';
 export * from './mock-recipe.js';
 export * from './measure-mesh.js';
+export * from './lpt2-particles.js';

@@ -4,6 +4,8 @@ import { linearPowerFromCosmology, validateCosmology } from '../cosmology/index.
 import { RealFourier3d } from '../numerics/fft-3d.js';
 import { gaussianFieldSpectrum } from './gaussian-field.js';
 import { linearGalaxySpectrum } from './linear-galaxy-field.js';
+import { lpt2Particles } from './lpt2-particles.js';
+import { particleOverdensitySpectrum } from './mass-assignment.js';
 import type { Mesh } from './mesh.js';
 import { checkMesh } from './mesh.js';
 import { secondOrderGalaxySpectrum } from './second-order-field.js';
@@ -12,7 +14,7 @@ import { addWhiteNoise, poissonSampledSpectrum } from './stochastic-field.js';
 /**
  * A mock box described in JSON:
  *   { "mesh": { "n": 128, "boxSize": 2000 }, "redshift": 1, "cosmology": { ... },
- *     "seed": 1, "order": "linear" | "second",
+ *     "seed": 1, "order": "linear" | "second" | "2lpt",
  *     "bias": { "b1": 2, "b2": 0.5, "bG2": -0.29 }, "growthRate": 0.87 (optional),
  *     "noise": { "kind": "gaussian" | "poisson", "numberDensity": 3e-4 } (optional) }
  */
@@ -21,7 +23,8 @@ export interface MockRecipe {
   readonly redshift: number;
   readonly cosmology: unknown;
   readonly seed: number;
-  readonly order: 'linear' | 'second';
+  /** 2lpt: matter particles (bias ignored) assigned to the mesh by interlaced, compensated CIC. */
+  readonly order: 'linear' | 'second' | '2lpt';
   readonly bias: { readonly b1: number; readonly b2: number; readonly bG2: number };
   readonly growthRate: number | undefined;
   readonly noise: { readonly kind: 'gaussian' | 'poisson'; readonly numberDensity: number } | undefined;
@@ -46,7 +49,7 @@ export function validateMockRecipe(json: unknown, file: string): MockRecipe {
   const redshift = num('redshift', json.redshift, (x) => x >= 0, 'a number >= 0');
   const seed = num('seed', json.seed, (x) => Number.isInteger(x), 'an integer');
   const order = json.order ?? 'linear';
-  if (order !== 'linear' && order !== 'second') problems.push(`${file}: order must be "linear" or "second", got ${JSON.stringify(order)}`);
+  if (order !== 'linear' && order !== 'second' && order !== '2lpt') problems.push(`${file}: order must be "linear", "second" or "2lpt", got ${JSON.stringify(order)}`);
   const bias = isObject(json.bias) ? json.bias : {};
   if (!isObject(json.bias)) problems.push(`${file}: bias must be an object { b1, b2, bG2 }`);
   const b1 = num('bias.b1', bias.b1, () => true, 'a number');
@@ -72,14 +75,20 @@ export function recipeSpectrum(recipe: MockRecipe, file: string): LinearSpectrum
 /**
  * The overdensity of a recipe's mock on its mesh (real space, the layout of
  * src/numerics/fft-3d.ts): Gaussian linear field from `seed`, then the linear
- * (Z1) or second-order (Z1 + Z2) redshift-space galaxy field, then the noise
+ * (Z1) or second-order (Z1 + Z2) redshift-space galaxy field or 2LPT matter
+ * particles on the mesh, then the noise
  * (seed + 1 for its own random numbers).
  */
 export function makeMockField(recipe: MockRecipe, spectrum: LinearSpectrum): { values: Float64Array; objects: number | undefined } {
   const { mesh, bias, seed } = recipe;
   const f = recipe.growthRate ?? spectrum.growthRateLargeScale;
   const lin = gaussianFieldSpectrum(mesh, (k) => spectrum.power(k), seed);
-  let spec = recipe.order === 'second' ? secondOrderGalaxySpectrum(lin, mesh, { ...bias, f }) : linearGalaxySpectrum(lin, mesh, bias.b1, f);
+  let spec =
+    recipe.order === 'second'
+      ? secondOrderGalaxySpectrum(lin, mesh, { ...bias, f })
+      : recipe.order === '2lpt'
+        ? particleOverdensitySpectrum(lpt2Particles(lin, mesh, f), mesh)
+        : linearGalaxySpectrum(lin, mesh, bias.b1, f);
   let objects: number | undefined;
   if (recipe.noise?.kind === 'gaussian') spec = addWhiteNoise(spec, mesh, 1 / recipe.noise.numberDensity, seed + 1);
   if (recipe.noise?.kind === 'poisson') {

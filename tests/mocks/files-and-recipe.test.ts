@@ -35,7 +35,7 @@ describe('mock files and recipes', () => {
 
   it('a recipe lists every problem by key', () => {
     expect(() => validateMockRecipe({ mesh: { n: 12, boxSize: 100 }, redshift: -1, seed: 1, bias: { b1: 2 }, order: 'third', colour: 1 }, 'r.json')).toThrow(
-      /r\.json: colour is not a known key[\s\S]*mesh\.n must be a power of two[\s\S]*redshift must be a number >= 0[\s\S]*order must be "linear" or "second"/,
+      /r\.json: colour is not a known key[\s\S]*mesh\.n must be a power of two[\s\S]*redshift must be a number >= 0[\s\S]*order must be "linear", "second" or "2lpt"/,
     );
   });
 });
