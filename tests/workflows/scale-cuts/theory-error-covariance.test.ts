@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { theoryErrorCovariance } from '../../src/workflows/scale-cuts/theory-error-covariance.js';
+import { theoryErrorCovariance } from '../../../src/workflows/scale-cuts/theory-error-covariance.js';
 
 describe('theoretical-error covariance (Baldauf et al. 2016, PRD 93, 123007)', () => {
   const entries = [

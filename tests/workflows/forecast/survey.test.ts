@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { Background } from '../../src/cosmology/background.js';
-import { defaultB2, resolveSurvey, shellVolume } from '../../src/workflows/forecast/survey.js';
+import { Background } from '../../../src/cosmology/background.js';
+import { defaultB2, resolveSurvey, shellVolume } from '../../../src/workflows/forecast/survey.js';
 
 // Einstein–de Sitter without radiation: chi(z) = 2 (c/H0) (1 - 1/sqrt(1+z)), c/H0 = 2997.92458 Mpc/h
 // (REFERENCES.md; Hogg 1999, astro-ph/9905116, eq. 16 with Omega_M = 1).
