@@ -12,6 +12,7 @@ import {
   triangleShapeClasses,
 } from '../../bispectrum/index.js';
 import { linearSpectrumOfConfig, readLinearTheoryConfig } from '../../cosmology/index.js';
+import { numberOption, parameterAssignments } from '../cli-options.js';
 import { action } from '../run-command.js';
 
 interface TreeBispectrumOptions {
@@ -26,25 +27,6 @@ interface TreeBispectrumOptions {
   ir: boolean;
   set: string[];
   out?: string;
-}
-
-function numberOption(name: string, text: string): number {
-  const v = Number(text);
-  if (text.trim() === '' || !Number.isFinite(v)) throw new InputError(`--${name} must be a number, got "${text}"`);
-  return v;
-}
-
-function assignments(items: string[]): Record<string, number> {
-  const names: readonly string[] = TREE_BISPECTRUM_PARAMETERS;
-  const out: Record<string, number> = {};
-  for (const item of items) {
-    const [name, value, extra] = item.split('=');
-    if (value === undefined || extra !== undefined || !names.includes(name)) {
-      throw new InputError(`--set ${item}: expected name=value with name one of ${names.join(', ')}`);
-    }
-    out[name] = numberOption(`set ${name}`, value);
-  }
-  return out;
 }
 
 function readText(path: string): string {
@@ -82,7 +64,7 @@ export function registerTreeBispectrum(program: Command): void {
           multipoles: opts.ell.split(',').map((s) => numberOption('ell', s)),
           ...(opts.nbar === undefined ? {} : { numberDensity: numberOption('nbar', opts.nbar) }),
         };
-        const params = assignments(opts.set);
+        const params = parameterAssignments(opts.set, TREE_BISPECTRUM_PARAMETERS);
         if (opts.triangles !== undefined) {
           const model = new TreeBispectrumModel({
             ...common,
