@@ -29,12 +29,22 @@ const size = 1000;
 const bins = { ...all, size, indices: all.indices.slice(0, 3 * size), centres: all.centres.slice(0, 3 * size) };
 const fiducial = { b1: 2, f: 0.75, b2: 0.5, bG2: -0.3, pCt0: 2, pCt2: 1, pCt4: 0, pStochConst: 1, bispShotPower: 1, bispShotConst: 1 };
 
+/** A dense positive-definite covariance for the timing: 0.01 |v_i v_j| (0.7 delta_ij + 0.3), i.e. 30% correlations everywhere. */
+function denseCovariance(values: ArrayLike<number>, n: number): Float64Array {
+  const m = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    for (let j = 0; j < n; j++) m[i * n + j] = (i === j ? 1 : 0.3) * 0.01 * Math.abs(values[i] * values[j]);
+  }
+  return m;
+}
+
 function writeBenchBundle(dir: string): void {
   const spectrum = linearPowerFromCosmology(PLANCK_2018, z);
   const p = new PowerMultipoleModel({ spectrum, bins: pBins, nbar }).evaluate(fiducial);
   const b = new TreeBispectrumModel({ spectrum, bins, multipoles: [0], numberDensity: nbar, averaging: 'centres' }).evaluate(fiducial);
   const centres = Array.from({ length: pBins.count }, (_, i) => pBins.kMin + i * pBins.dk);
   const kf = (2 * Math.PI) / box;
+  const data = [...p, ...b];
   writeMeasurementBundle(dir, {
     redshift: z,
     numberDensity: nbar,
@@ -50,6 +60,7 @@ function writeBenchBundle(dir: string): void {
       multipoles: [0],
       values: [b],
     },
+    covariance: { matrix: denseCovariance(data, data.length), size: data.length },
   });
 }
 
@@ -64,6 +75,23 @@ const marginalised = {
   bispShotConst: { prior: { kind: 'flat' }, marginalise: true },
 };
 const models = { bispectrum: { averaging: 'centres' } };
+const templateParameters = {
+  b1: { prior: { kind: 'uniform', min: 0.5, max: 4 }, start: 2 },
+  fsigma8: { prior: { kind: 'uniform', min: 0.1, max: 1 }, start: 0.45 },
+  alphaPar: { prior: { kind: 'uniform', min: 0.8, max: 1.2 }, start: 1 },
+  alphaPerp: { prior: { kind: 'uniform', min: 0.8, max: 1.2 }, start: 1 },
+  templateAmplitude: { value: 1 },
+  ...marginalised,
+};
+const fullParameters = {
+  h: { prior: { kind: 'uniform', min: 0.6, max: 0.75 }, start: 0.6736 },
+  omegaB: { value: 0.02237 },
+  omegaCdm: { prior: { kind: 'uniform', min: 0.1, max: 0.14 }, start: 0.12 },
+  ns: { value: 0.9649 },
+  lnAs: { prior: { kind: 'uniform', min: 2.5, max: 3.5 }, start: 3.044 },
+  b1: { prior: { kind: 'uniform', min: 0.5, max: 4 }, start: 2 },
+  ...marginalised,
+};
 
 const bench: Benchmark = {
   name: 'likelihood',
@@ -71,37 +99,15 @@ const bench: Benchmark = {
     const dir = mkdtempSync(join(tmpdir(), 'treble-likelihood-bench-'));
     try {
       writeBenchBundle(dir);
-      const common = { bundle: dir, covariance: { source: 'gaussian' }, models };
-      const template = createJointLikelihood({
-        ...common,
-        cosmology: { mode: 'fixed-template' },
-        parameters: {
-          b1: { prior: { kind: 'uniform', min: 0.5, max: 4 }, start: 2 },
-          fsigma8: { prior: { kind: 'uniform', min: 0.1, max: 1 }, start: 0.45 },
-          alphaPar: { prior: { kind: 'uniform', min: 0.8, max: 1.2 }, start: 1 },
-          alphaPerp: { prior: { kind: 'uniform', min: 0.8, max: 1.2 }, start: 1 },
-          templateAmplitude: { value: 1 },
-          ...marginalised,
-        },
-      });
-      const full = createJointLikelihood({
-        ...common,
-        cosmology: { mode: 'full' },
-        parameters: {
-          h: { prior: { kind: 'uniform', min: 0.6, max: 0.75 }, start: 0.6736 },
-          omegaB: { value: 0.02237 },
-          omegaCdm: { prior: { kind: 'uniform', min: 0.1, max: 0.14 }, start: 0.12 },
-          ns: { value: 0.9649 },
-          lnAs: { prior: { kind: 'uniform', min: 2.5, max: 3.5 }, start: 3.044 },
-          b1: { prior: { kind: 'uniform', min: 0.5, max: 4 }, start: 2 },
-          ...marginalised,
-        },
-      });
+      const gaussian = { bundle: dir, covariance: { source: 'gaussian' }, models };
+      const template = createJointLikelihood({ ...gaussian, cosmology: { mode: 'fixed-template' }, parameters: templateParameters });
+      const dense = createJointLikelihood({ ...gaussian, covariance: { source: 'matrix' }, cosmology: { mode: 'fixed-template' }, parameters: templateParameters });
+      const full = createJointLikelihood({ ...gaussian, cosmology: { mode: 'full' }, parameters: fullParameters });
       const theta = Float64Array.from([2, 0.45, 1, 1]);
       let step = 0;
-      const newBias = () => {
+      const newBias = (L: typeof template) => () => {
         theta[0] = 2 + 1e-6 * (step++ % 1000);
-        return template.logPosterior(theta);
+        return L.logPosterior(theta);
       };
       const newDilations = () => {
         theta[2] = 1 + 1e-6 * (step++ % 1000);
@@ -113,9 +119,11 @@ const bench: Benchmark = {
         return full.logPosterior(cosmo);
       };
       return {
-        setup: `P0, P2, P4 x 40 k bins + B0 x ${size} triangle bins (centres), ${template.size} data, 8 parameters marginalised, analytic Gaussian covariance in ${template.factor.blocks.length} independent blocks, EH98 Planck 2018 at z = ${z}`,
+        setup: `P0, P2, P4 x 40 k bins + B0 x ${size} triangle bins (centres), ${template.size} data, 8 parameters marginalised, EH98 Planck 2018 at z = ${z}`,
         covariance: template.describe().covariance,
-        fixedPowerNewBiasMs: timeMedian(newBias, 300, 30),
+        covarianceBlocks: template.factor.blocks.length,
+        fixedPowerNewBiasMs: timeMedian(newBias(template), 300, 30),
+        fixedPowerNewBiasDenseCovarianceMs: timeMedian(newBias(dense), 100, 10),
         fixedPowerNewDilationsMs: timeMedian(newDilations, 10, 2),
         newCosmologyMs: timeMedian(newCosmology, 10, 2),
       };
