@@ -1,0 +1,96 @@
+/**
+ * Tree-level bispectrum speed (issue 3). One core, one process.
+ * (a) full evaluation of B_0 and B_2, continuous bin average converged to 1e-6,
+ *     from a new linear power spectrum (each repetition takes the next of several
+ *     prepared spectra), for 477 bins (0.01–0.15, dk 0.01) and 6613 bins
+ *     (0.01–0.2, dk 0.005); geometry (bin nodes, pair kernels, orientation
+ *     weights) is precomputed once and timed separately; the producer's own cost
+ *     of building a spectrum is reported apart as well.
+ * (b) re-evaluation for new bias and stochastic parameters from templates.
+ */
+import type { Benchmark } from './harness.js';
+import { timeMedian } from './harness.js';
+import {
+  continuousBinNodes,
+  DEFAULT_VOLUME_ORDER,
+  enumerateTriangleBins,
+  orientationRule,
+  shellGrid,
+  TreeBispectrumModel,
+  TreeMultipoleEvaluator,
+  defaultTreeOrientationRule,
+  resolveTreeSettings,
+  combineTreeTemplates,
+} from '../src/bispectrum/index.js';
+import { linearPowerFromCosmology, validateCosmology } from '../src/cosmology/index.js';
+import type { LinearSpectrum } from '../src/contracts/linear-spectrum.js';
+import { Random } from '../src/numerics/random.js';
+
+const cosmology = (h: number) =>
+  validateCosmology({ h, omegaB: 0.02237, omegaCdm: 0.12, ns: 0.9649, lnAs: 3.044, mNu: 0.06, massiveNuCount: 1 }, { path: 'cosmology', file: 'bench' });
+
+function maxRelative(a: Float64Array, b: Float64Array): number {
+  let e = 0;
+  for (let i = 0; i < a.length; i++) e = Math.max(e, Math.abs(a[i] / b[i] - 1));
+  return e;
+}
+
+const bench: Benchmark = {
+  name: 'bispectrum',
+  async run() {
+    const t0 = performance.now();
+    const spectra: LinearSpectrum[] = [0.66, 0.67, 0.68, 0.69].map((h) => linearPowerFromCosmology(cosmology(h), 0.61));
+    const spectrumBuildMs = (performance.now() - t0) / spectra.length;
+    const params = { b1: 2, b2: 0.4, bG2: -0.3, f: spectra[0].growthRateLargeScale, bispShotPower: 1, bispShotConst: 1 };
+    const settingsOf = (spectrum: LinearSpectrum) => ({ spectrum, numberDensity: 3e-4 });
+    const results: Record<string, unknown> = { linearSpectrumBuildMs: spectrumBuildMs, settings: 'IR resummation on, no FoG damping, alpha = 1, nbar = 3e-4' };
+    for (const [kMin, kMax, dk, repeats] of [
+      [0.01, 0.15, 0.01, 15],
+      [0.01, 0.2, 0.005, 5],
+    ]) {
+      const bins = enumerateTriangleBins(shellGrid(kMin, kMax, dk));
+      const rule = defaultTreeOrientationRule(resolveTreeSettings(settingsOf(spectra[0])), 2, kMax + dk);
+      const g0 = performance.now();
+      const nodes = continuousBinNodes(bins, DEFAULT_VOLUME_ORDER);
+      const evaluator = new TreeMultipoleEvaluator(nodes, [0, 2], rule);
+      const geometryMs = performance.now() - g0;
+      let next = 0;
+      const full = timeMedian(() => evaluator.evaluate(settingsOf(spectra[next++ % spectra.length]), params), repeats, 2);
+      // Accuracy of the converged setting against a much finer bin-volume quadrature and orientation rule.
+      const value = evaluator.evaluate(settingsOf(spectra[0]), params);
+      const fine = new TreeMultipoleEvaluator(continuousBinNodes(bins, DEFAULT_VOLUME_ORDER + 3), [0, 2], orientationRule(8, 10)).evaluate(
+        settingsOf(spectra[0]),
+        params,
+      );
+      const model = new TreeBispectrumModel({ ...settingsOf(spectra[0]), bins });
+      const tb0 = performance.now();
+      const templates = model.templates({});
+      const templateBuildMs = performance.now() - tb0;
+      const rng = new Random(11);
+      const out = new Float64Array(2 * bins.size);
+      const draws = Array.from({ length: 64 }, () => ({
+        b1: 1 + 2 * rng.uniform(),
+        b2: rng.uniform() - 0.5,
+        bG2: -0.5 * rng.uniform(),
+        f: 0.6 + 0.3 * rng.uniform(),
+        bispShotPower: 2 * rng.uniform(),
+        bispShotConst: 2 * rng.uniform(),
+      }));
+      let d = 0;
+      const reeval = timeMedian(() => combineTreeTemplates(templates, 2, draws[d++ % draws.length], out), 200, 20);
+      results[`bins${bins.size}`] = {
+        binning: { kMin, kMax, dk, bins: bins.size },
+        geometry: { volumeNodes: nodes.weight.length, orientationPoints: rule.weight.length, precomputeMs: geometryMs },
+        fullEvaluationMs: full,
+        fullEvaluationTargetMs: bins.size === 477 ? 10 : 100,
+        maxRelativeDifferenceToFinerQuadrature: maxRelative(value, fine),
+        templateBuildFromNewSpectrumMs: templateBuildMs,
+        templateReEvaluationMs: reeval,
+        templateReEvaluationTargetMs: 0.5,
+      };
+    }
+    return results;
+  },
+};
+
+export default bench;
