@@ -57,6 +57,19 @@ function tableText(kind: 'P' | 'B', t: StatisticColumns): string {
   return `${lines.join('\n')}\n`;
 }
 
+/** Header cells of a covariance file: the block, then the bin centres ("P2 k=0.05", "B0 k=0.1/0.08/0.05"). */
+function entryHeaders(kind: 'P' | 'B', t: StatisticColumns | undefined): string[] {
+  if (!t) return [];
+  const sides = kind === 'P' ? 1 : 3;
+  const out: string[] = [];
+  for (const l of t.multipoles) {
+    for (let r = 0; r < t.counts.length; r++) {
+      out.push(`${kind}${l} k=${Array.from({ length: sides }, (_, s) => t.centres[r * sides + s]).join('/')}`);
+    }
+  }
+  return out;
+}
+
 export function writeMeasurementBundle(folder: string, b: BundleToWrite): void {
   mkdirSync(folder, { recursive: true });
   const meta: Record<string, unknown> = { format: BUNDLE_FORMAT };
@@ -77,7 +90,9 @@ export function writeMeasurementBundle(folder: string, b: BundleToWrite): void {
   }
   if (b.covariance) {
     const { matrix, size } = b.covariance;
-    const lines: string[] = [];
+    const labels = [...entryHeaders('P', b.power), ...entryHeaders('B', b.bispectrum)];
+    if (labels.length !== size) throw new Error(`covariance of size ${size} for a data vector of ${labels.length} entries`);
+    const lines: string[] = [labels.join(',')];
     for (let i = 0; i < size; i++) lines.push(Array.from({ length: size }, (_, j) => String(matrix[i * size + j])).join(','));
     writeFileSync(join(folder, COVARIANCE_FILE), `${lines.join('\n')}\n`);
     meta.covarianceMatrix = COVARIANCE_FILE;

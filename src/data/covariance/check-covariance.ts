@@ -1,10 +1,9 @@
 import { InputError } from '../../contracts/input-error.js';
-import { choleskyFactor, type CholeskyFactor } from './cholesky-factor.js';
 
 /**
  * Checks every covariance passes before use: its size matches the data vector,
- * every element is finite, it is symmetric, and it is positive definite (the
- * factorisation refuses it otherwise, quoting the smallest eigenvalue).
+ * every element is finite and it is symmetric. Positive definiteness is checked
+ * by the factorisation (choleskyFactor), which quotes the smallest eigenvalue.
  */
 export function checkCovarianceShape(values: Float64Array, size: number, expected: number, label: string): void {
   if (size !== expected || values.length !== size * size) {
@@ -24,10 +23,4 @@ export function checkCovarianceShape(values: Float64Array, size: number, expecte
       }
     }
   }
-}
-
-/** Shape checks, then the Cholesky factor (refusing a matrix that is not positive definite). */
-export function checkedCholesky(values: Float64Array, size: number, expected: number, label: string): CholeskyFactor {
-  checkCovarianceShape(values, size, expected, label);
-  return choleskyFactor(values, size, label);
 }

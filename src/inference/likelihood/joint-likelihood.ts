@@ -1,5 +1,6 @@
 import { InputError } from '../../contracts/input-error.js';
 import type { ParameterValues, StatisticModel } from '../../contracts/statistic-model.js';
+import { checkCovarianceShape } from '../../data/covariance/check-covariance.js';
 import type { PreparedCovariance } from '../../data/covariance/covariance-choice.js';
 import type { MeasurementBundle } from '../../data/measurement-bundle.js';
 import { selectVector, type DataSelection } from '../../data/scale-cuts.js';
@@ -59,7 +60,9 @@ export class JointLikelihood {
     this.selection = parts.selection;
     this.covariance = parts.covariance;
     this.source = parts.models;
-    this.factor = new BlockCholesky(parts.covariance.matrix, parts.covariance.size, parts.covariance.description.source);
+    const label = `covariance (${parts.covariance.description.source})`;
+    checkCovarianceShape(parts.covariance.matrix, parts.covariance.size, parts.selection.indices.length, label);
+    this.factor = new BlockCholesky(parts.covariance.matrix, parts.covariance.size, label);
     this.whitenedData = this.factor.whiten(selectVector(parts.bundle.dataVector.values, parts.selection.indices));
     this.linearNames = parts.parameters.marginalised.map((m) => m.name);
     this.linearPriors = parts.parameters.marginalised;

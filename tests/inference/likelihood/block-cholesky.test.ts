@@ -1,6 +1,7 @@
 import { Matrix } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
-import { checkedCholesky } from '../../../src/data/covariance/check-covariance.js';
+import { checkCovarianceShape } from '../../../src/data/covariance/check-covariance.js';
+import { choleskyFactor } from '../../../src/data/covariance/cholesky-factor.js';
 import { BlockCholesky } from '../../../src/inference/likelihood/block-cholesky.js';
 import { DenseGaussian, randomCovariance, randomVector } from './support/dense-reference.js';
 
@@ -42,7 +43,7 @@ describe('covariance refusals', () => {
     // [[2, 1, 0], [1, 2, 3], [0, 3, 2]] has eigenvalues 2 and 2 +- sqrt(10): the smallest is -1.16228
     // (characteristic polynomial worked by hand: (2 - x)[(2 - x)^2 - 10] = 0).
     const m = Float64Array.from([2, 1, 0, 1, 2, 3, 0, 3, 2]);
-    expect(() => checkedCholesky(m, 3, 3, 'covariance.csv')).toThrow(/covariance\.csv is not positive definite: smallest eigenvalue -1\.16228/);
+    expect(() => choleskyFactor(m, 3, 'covariance.csv')).toThrow(/covariance\.csv is not positive definite: smallest eigenvalue -1\.16228/);
     expect(2 - Math.sqrt(10)).toBeCloseTo(-1.16228, 5);
     // The same refusal from inside a block of a block-structured matrix: the block [[2, 1], [1, 0.2]]
     // has eigenvalues 1.1 +- sqrt(1.81), the smallest -0.245362 (by hand).
@@ -56,16 +57,16 @@ describe('covariance refusals', () => {
 
   it('refuses NaN elements, naming the element', () => {
     const m = Float64Array.from([1, 0, 0, Number.NaN]);
-    expect(() => checkedCholesky(m, 2, 2, 'cov')).toThrow(/cov: element \(2, 2\) is NaN/);
+    expect(() => checkCovarianceShape(m, 2, 2, 'cov')).toThrow(/cov: element \(2, 2\) is NaN/);
   });
 
   it('refuses a size that does not match the data vector, giving both sizes', () => {
     const m = Float64Array.from(new Matrix([[1, 0], [0, 1]]).to1DArray());
-    expect(() => checkedCholesky(m, 2, 3, 'cov')).toThrow(/cov: a 2 x 2 matrix .* does not match the data vector of 3 entries/);
+    expect(() => checkCovarianceShape(m, 2, 3, 'cov')).toThrow(/cov: a 2 x 2 matrix .* does not match the data vector of 3 entries/);
   });
 
   it('refuses an asymmetric matrix, naming the element', () => {
     const m = Float64Array.from([1, 0.5, 0.4, 1]);
-    expect(() => checkedCholesky(m, 2, 2, 'cov')).toThrow(/not symmetric at \(2, 1\)/);
+    expect(() => checkCovarianceShape(m, 2, 2, 'cov')).toThrow(/not symmetric at \(2, 1\)/);
   });
 });

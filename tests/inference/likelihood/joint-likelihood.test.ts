@@ -116,6 +116,23 @@ describe('joint likelihood', () => {
     expect(() => L.logLikelihoodAt(parameters.values(Float64Array.from([1, 1])))).toThrow(/do not constrain the analytically marginalised parameters c0, c1, s0/);
   });
 
+  it('refuses a covariance file that is not positive definite or holds NaN, with the smallest eigenvalue or the cell', () => {
+    const bad = { ...files, files: { ...files.files } };
+    const broken = Float64Array.from(cov);
+    broken[3 * N + 3] = -5;
+    bad.files['covariance.csv'] = [header, ...Array.from({ length: N }, (_, i) => Array.from(broken.subarray(i * N, (i + 1) * N)).join(','))].join('\n');
+    const b = loadMeasurementBundle(writeBundle(bad));
+    const selection = selectData(b.dataVector.entries);
+    const parameters = new ParameterSpace(specs(false));
+    const c = prepareCovariance({ source: 'matrix' }, { bundle: b, selection, freeParameters: 2 });
+    expect(() => new JointLikelihood({ bundle: b, selection, covariance: c, parameters, models: fixedModelSource(models) })).toThrow(
+      /covariance \(matrix file\) is not positive definite: smallest eigenvalue -\d/,
+    );
+    bad.files['covariance.csv'] = bad.files['covariance.csv'].replace(/\n([^,\n]+),/, '\nNaN,');
+    const withNaN = loadMeasurementBundle(writeBundle(bad));
+    expect(() => prepareCovariance({ source: 'matrix' }, { bundle: withNaN, selection, freeParameters: 2 })).toThrow(/covariance\.csv:2: column 1 \(P0_0\) is not a finite number: 'NaN'/);
+  });
+
   it('refuses models whose entries do not match the data vector', () => {
     const parameters = new ParameterSpace(specs(false));
     const selection = selectData(entries);
