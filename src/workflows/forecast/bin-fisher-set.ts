@@ -23,7 +23,10 @@ import type { SurveyBin } from './survey.js';
  * cross term, no super-sample or non-Gaussian terms. Cosmology parameters
  * rebuild the linear spectrum (and so the growth rate f) and move the AP
  * dilations relative to the fiducial background, as in a full-mode fit.
- * Each statistic's matrix lists only the parameters it reads.
+ * Each statistic's matrix lists only the parameters it reads. The Gaussian B
+ * variance needs the model P_0 at every triangle side, so the bundle's power
+ * bins reach the bispectrum's largest k (or, without P bins, are P_0 on the
+ * triangle shells); P entries beyond the power kMax enter only that variance.
  */
 export interface BinFisherInputs {
   readonly bin: SurveyBin;
@@ -51,7 +54,10 @@ export interface BinFisherSet {
 export function binFisherSet(inp: BinFisherInputs): BinFisherSet {
   const { bin } = inp;
   const label = inp.label ?? 'survey bin';
-  const bundle = binningBundle({ redshift: bin.zEff, numberDensity: bin.nbar, volume: bin.volume, fiducialCosmology: inp.cosmology, power: inp.power, bispectrum: inp.bispectrum, label });
+  const b = inp.bispectrum;
+  const covered = inp.power ? { ...inp.power, kMax: Math.max(inp.power.kMax, b?.kMax ?? 0) } : b && { ...b, multipoles: [0] };
+  const bundle = binningBundle({ redshift: bin.zEff, numberDensity: bin.nbar, volume: bin.volume, fiducialCosmology: inp.cosmology, power: covered, bispectrum: b, label });
+  const powerKMax = (inp.power?.kMax ?? -1) * (1 + 1e-9);
   const cosmologyNames = inp.names.filter((n) => n in COSMOLOGY_FIELDS);
   const fiducialCosmology = validateCosmology(inp.cosmology, { path: 'cosmology' });
   const fiducialBackground = backgroundOf(fiducialCosmology);
@@ -70,8 +76,8 @@ export function binFisherSet(inp: BinFisherInputs): BinFisherSet {
   const models = source.prepare(fiducial).models;
   for (const n of inp.names) for (const m of models) if (fiducial[n] === undefined && m.defaults[n] !== undefined) fiducial[n] = m.defaults[n];
   const readBy = (statistic: 'P' | 'B') => new Set(models.filter((m) => m.entries[0]?.block.startsWith(statistic)).flatMap((m) => m.parameterNames));
-  const readP = readBy('P');
-  const readB = readBy('B');
+  const readP = inp.power ? readBy('P') : new Set<string>();
+  const readB = b ? readBy('B') : new Set<string>();
   for (const n of inp.names) {
     if (!(n in COSMOLOGY_FIELDS) && !readP.has(n) && !readB.has(n)) {
       throw new InputError(`parameters: "${n}" is neither a cosmology parameter nor read by the models (they read: ${[...new Set([...readP, ...readB])].join(', ')})`, { where: `parameters.${n}` });
@@ -82,18 +88,19 @@ export function binFisherSet(inp: BinFisherInputs): BinFisherSet {
   const covariance = prepareCovariance({ source: 'gaussian', modeCounts: 'continuous', triangleCounts: 'bin-volume' }, { bundle, selection: all, theory, freeParameters: inp.names.length });
   const full = bundle.dataVector.entries.length;
   const fisherOf = (statistics: readonly ('P' | 'B')[], names: readonly string[]) => {
-    const indices = Int32Array.from(bundle.dataVector.entries.flatMap((e, i) => (statistics.includes(e.statistic) ? [i] : [])));
+    const used = (e: (typeof bundle.dataVector.entries)[number]) => statistics.includes(e.statistic) && (e.statistic === 'B' || e.k[0] <= powerKMax);
+    const indices = Int32Array.from(bundle.dataVector.entries.flatMap((e, i) => (used(e) ? [i] : [])));
     return selectionFisher({ vector, names, fiducial, indices, covariance: selectMatrix(covariance.matrix, full, indices), steps: inp.steps, label: `${label} covariance` });
   };
   const namesFor = (read: Set<string>) => inp.names.filter((n) => n in COSMOLOGY_FIELDS || read.has(n));
-  const statistics = [...(bundle.power ? ['P' as const] : []), ...(bundle.bispectrum ? ['B' as const] : [])];
+  const statistics = [...(inp.power ? ['P' as const] : []), ...(b ? ['B' as const] : [])];
   return {
     fiducial,
-    power: bundle.power ? fisherOf(['P'], namesFor(readP)) : undefined,
+    power: inp.power ? fisherOf(['P'], namesFor(readP)) : undefined,
     bispectrum: bundle.bispectrum ? fisherOf(['B'], namesFor(readB)) : undefined,
     joint: fisherOf(statistics, inp.names),
     dataPoints: {
-      power: bundle.dataVector.entries.filter((e) => e.statistic === 'P').length,
+      power: bundle.dataVector.entries.filter((e) => e.statistic === 'P' && e.k[0] <= powerKMax).length,
       bispectrum: bundle.dataVector.entries.filter((e) => e.statistic === 'B').length,
     },
   };
