@@ -10,6 +10,7 @@ import { linearPowerFromCosmology } from '../../../src/cosmology/linear-power-fr
 import { binVolumeTriangleCount, continuousModeCount } from '../../../src/data/index.js';
 import { writeMeasurementBundle } from '../../../src/data/write-measurement-bundle.js';
 import { createJointLikelihood, createJointLogPosterior } from '../../../src/inference/likelihood/joint-likelihood-options.js';
+import { scaledSpectrum } from '../../../src/inference/likelihood/model-source.js';
 import { loadLogPosterior } from '../../../src/inference/sampling/load-log-posterior.js';
 import { normalizeLogPosteriorReference } from '../../../src/inference/sampling/log-posterior-reference.js';
 import { PowerMultipoleModel } from '../../../src/power/power-multipole-model.js';
@@ -133,6 +134,23 @@ describe('likelihood with the power and bispectrum models on a bundle', () => {
     expect(other.chi2).toBeGreaterThan(1);
     // An h outside the cosmology code's range is refused by the posterior, not thrown.
     expect(full.logPosterior(Float64Array.from([0.3, 1.9]))).toBe(-Infinity);
+  });
+
+  it('fixed-template amplitude: the template power scales by q^2 and sigma8Cold by q', () => {
+    const free = createJointLikelihood({
+      ...templateOptions,
+      parameters: { ...templateOptions.parameters, templateAmplitude: { prior: { kind: 'uniform', min: 0.8, max: 1.2 }, start: 1 } },
+    });
+    const at1 = free.pointAt(Float64Array.from([1.9, fs8, 1]));
+    const at2 = free.pointAt(Float64Array.from([1.9, fs8, 1.05]));
+    expect(at1.chi2).toBeLessThan(1e-6);
+    expect(at2.chi2).toBeGreaterThan(1);
+    expect(at2.values.sigma8Cold).toBeCloseTo(1.05 * spectrum.sigma8, 12);
+    expect(at2.values.f).toBeCloseTo(f / 1.05, 12);
+    const q = scaledSpectrum(spectrum, 1.05);
+    expect(q.power(0.1) / spectrum.power(0.1)).toBeCloseTo(1.1025, 12);
+    expect(q.powerNoWiggle(0.1) / spectrum.powerNoWiggle(0.1)).toBeCloseTo(1.1025, 12);
+    expect(q.sigma2BAO / spectrum.sigma2BAO).toBeCloseTo(1.1025, 12);
   });
 
   it('refuses a configuration missing the template parameters', () => {
