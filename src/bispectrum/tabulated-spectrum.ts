@@ -7,9 +7,12 @@ import { CubicSpline } from '../numerics/cubic-spline.js';
  * of a bin-averaged bispectrum cost a few flops each instead of the producer's
  * own interpolation. The grid reaches PAD steps beyond [kLo, kHi] (when the
  * source allows) so that the natural end conditions do not spoil the range in
- * use; the accuracy is tested in tests/bispectrum/tabulated-spectrum.test.ts.
+ * use, and [kLo, kHi] is first widened to multiples of SNAP so that nearby
+ * requests share one grid (results do not jitter with the exact node range).
+ * Accuracy: tests/bispectrum/fast-evaluator.test.ts.
  */
 const PAD = 12;
+const SNAP = 1e-3;
 
 export class TabulatedSpectrum implements LinearSpectrum {
   readonly redshift: number;
@@ -24,9 +27,12 @@ export class TabulatedSpectrum implements LinearSpectrum {
   private readonly source: LinearSpectrum;
 
   constructor(source: LinearSpectrum, kLo: number, kHi: number, points = 2000) {
-    const step = (kHi - kLo) / (points - 1 - 2 * PAD);
-    const lo = Math.max(source.kMin, kLo - PAD * step);
-    const hi = Math.min(source.kMax, kHi + PAD * step);
+    const snapLo = Math.floor(kLo / SNAP) * SNAP;
+    const a = snapLo > 0 ? snapLo : kLo;
+    const b = Math.ceil(kHi / SNAP) * SNAP;
+    const step = (b - a) / (points - 1 - 2 * PAD);
+    const lo = Math.max(source.kMin, a - PAD * step);
+    const hi = Math.min(source.kMax, b + PAD * step);
     const k = new Float64Array(points);
     const nw = new Float64Array(points);
     const w = new Float64Array(points);
@@ -39,8 +45,8 @@ export class TabulatedSpectrum implements LinearSpectrum {
     this.wiggle = new CubicSpline(k, w);
     this.source = source;
     this.redshift = source.redshift;
-    this.kMin = Math.max(source.kMin, kLo);
-    this.kMax = Math.min(source.kMax, kHi);
+    this.kMin = Math.max(source.kMin, a);
+    this.kMax = Math.min(source.kMax, b);
     this.growthRateLargeScale = source.growthRateLargeScale;
     this.sigma2BAO = source.sigma2BAO;
     this.deltaSigma2BAO = source.deltaSigma2BAO;

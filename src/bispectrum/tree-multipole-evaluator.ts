@@ -100,6 +100,7 @@ export class TreeMultipoleEvaluator {
     const out = new Float64Array(binCount * nm);
     const { mu1: M1, sinMu1, cosPhi } = this.rule;
     const nOrient = M1.length;
+    const nPhi = this.rule.phiCount;
     const wl = this.weights;
     const { b1, b2, bG2, f } = p;
     const sig2 = tab.sigma2BAO;
@@ -128,14 +129,20 @@ export class TreeMultipoleEvaluator {
         const w2k = ir ? tab.powerWiggle(k2) * Math.exp(-k2 * k2 * sig2) : tab.powerWiggle(k2);
         const w3k = ir ? tab.powerWiggle(k3) * Math.exp(-k3 * k3 * sig2) : tab.powerWiggle(k3);
         const wn = weight[i];
+        // Orientation points are mu-major: side 1's damping factors change only with the mu node.
+        let P1 = 0;
+        let d1 = 0;
         for (let o = 0; o < nOrient; o++) {
           const m1 = M1[o];
+          const q1 = m1 * m1;
+          if (o % nPhi === 0) {
+            P1 = ir ? n1k + w1k * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : n1k + w1k;
+            d1 = -halfSv2 * k1 * k1 * q1;
+          }
           const m2 = m1 * c12 - sinMu1[o] * s12 * cosPhi[o];
           const m3 = -(k1 * m1 + k2 * m2) / k3;
-          const q1 = m1 * m1;
           const q2 = m2 * m2;
           const q3 = m3 * m3;
-          const P1 = ir ? n1k + w1k * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : n1k + w1k;
           const P2 = ir ? n2k + w2k * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : n2k + w2k;
           const P3 = ir ? n3k + w3k * Math.exp(-k3 * k3 * q3 * (aIR + cIR * q3)) : n3k + w3k;
           const z1 = b1 + f * q1;
@@ -146,7 +153,7 @@ export class TreeMultipoleEvaluator {
           const zz23 = pairZ2(b1, b2, bG2, f, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5], k2, k3, m2, m3, q2, q3, q1);
           const zz31 = pairZ2(b1, b2, bG2, f, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8], k3, k1, m3, m1, q3, q1, q2);
           let b = 2 * (z1 * z2 * zz12 * P1 * P2 + z2 * z3 * zz23 * P2 * P3 + z3 * z1 * zz31 * P3 * P1);
-          if (sigmaV > 0) b *= Math.exp(-halfSv2 * (k1 * k1 * q1 + k2 * k2 * q2 + k3 * k3 * q3));
+          if (sigmaV > 0) b *= Math.exp(d1 - halfSv2 * (k2 * k2 * q2 + k3 * k3 * q3));
           b += stochP * (z1 * P1 + z2 * P2 + z3 * P3) + stochConst;
           for (let m = 0; m < nm; m++) acc[m] += wn * wl[o * nm + m] * b;
         }
