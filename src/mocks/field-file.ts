@@ -7,7 +7,8 @@ import { checkMesh, type Mesh } from './mesh.js';
  * A mesh field on disk (docs/conventions.md, "Mocks"): a JSON header
  *   { "format": "treble-mesh-field-1", "n", "boxSize", "quantity": "overdensity",
  *     "lineOfSight": "z-axis", "values": "<file>", "encoding": "float64-le",
- *     "order": "(ix n + iy) n + iz", ... extra numbers such as redshift }
+ *     "order": "(ix n + iy) n + iz", "cosmology": { named numbers } (optional),
+ *     ... extra numbers such as redshift }
  * beside a raw little-endian float64 file of the n^3 values.
  */
 export const MESH_FIELD_FORMAT = 'treble-mesh-field-1';
@@ -17,6 +18,8 @@ export interface MeshFieldFile {
   readonly values: Float64Array;
   /** Extra named numbers of the header (redshift, numberDensity, seed, ...). */
   readonly about: Readonly<Record<string, number>>;
+  /** Cosmological parameters the field was made with, when known. */
+  readonly cosmology?: Readonly<Record<string, number>>;
 }
 
 /** Writes `<path>` (the header, ending .json) and `<path without .json>.f64`. */
@@ -35,6 +38,7 @@ export function writeMeshField(path: string, field: MeshFieldFile): void {
     values: dataName,
     encoding: 'float64-le',
     order: '(ix n + iy) n + iz',
+    ...(field.cosmology ? { cosmology: field.cosmology } : {}),
     ...field.about,
   };
   writeFileSync(path, `${JSON.stringify(header, null, 2)}\n`);
@@ -63,5 +67,13 @@ export function readMeshField(path: string): MeshFieldFile {
   for (let i = 0; i < values.length; i++) values[i] = buf.readDoubleLE(8 * i);
   const about: Record<string, number> = {};
   for (const [k, v] of Object.entries(header)) if (typeof v === 'number' && k !== 'n' && k !== 'boxSize') about[k] = v;
-  return { mesh, values, about };
+  const c = header.cosmology;
+  let cosmology: Record<string, number> | undefined;
+  if (c !== undefined) {
+    if (typeof c !== 'object' || c === null || Array.isArray(c) || Object.values(c).some((v) => typeof v !== 'number')) {
+      throw new InputError(`${path}: cosmology must be an object of named numbers`, { where: `${path}:cosmology` });
+    }
+    cosmology = c as Record<string, number>;
+  }
+  return { mesh, values, about, cosmology };
 }

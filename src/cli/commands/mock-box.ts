@@ -35,6 +35,20 @@ interface MeasureOptions {
   shotNoise?: string;
   redshift?: string;
   numberDensity?: string;
+  cosmology?: string;
+}
+
+function cosmologyFile(path: string): Record<string, number> {
+  let json: unknown;
+  try {
+    json = JSON.parse(readFileSync(path, 'utf8'));
+  } catch (e) {
+    throw new InputError(`--cosmology ${path}: cannot read it (${(e as Error).message})`);
+  }
+  if (typeof json !== 'object' || json === null || Array.isArray(json) || Object.values(json).some((v) => typeof v !== 'number')) {
+    throw new InputError(`--cosmology ${path}: must be a JSON object of named numbers`);
+  }
+  return json as Record<string, number>;
 }
 
 /** `treble mock-box` (make a mock field from a JSON recipe) and `treble measure-box` (field or particles -> bundle). */
@@ -57,7 +71,7 @@ export function registerMockBox(program: Command): void {
         const about: Record<string, number> = { redshift: recipe.redshift, seed: recipe.seed, growthRate: recipe.growthRate ?? spectrum.growthRateLargeScale };
         if (recipe.noise) about.numberDensity = recipe.noise.numberDensity;
         if (objects !== undefined) about.objects = objects;
-        writeMeshField(opts.out, { mesh: recipe.mesh, values, about });
+        writeMeshField(opts.out, { mesh: recipe.mesh, values, about, cosmology: recipe.cosmology as Record<string, number> });
         process.stdout.write(`wrote ${opts.out} (${recipe.mesh.n}^3 mesh, box ${recipe.mesh.boxSize} Mpc/h)\n`);
       }),
     );
@@ -76,6 +90,7 @@ export function registerMockBox(program: Command): void {
     .option('--shot-noise <P>', 'subtracted from P_0, (Mpc/h)^3 (default 1/nbar for particles, 0 for a field)')
     .option('--redshift <z>', 'redshift recorded in the bundle (default the field header, else 0)')
     .option('--number-density <nbar>', 'number density recorded in the bundle, (h/Mpc)^3')
+    .option('--cosmology <file.json>', 'fiducial cosmology recorded in the bundle (default: the one in the field header)')
     .action(
       action((opts: MeasureOptions) => {
         if ((opts.field === undefined) === (opts.particles === undefined)) throw new InputError('measure-box: give exactly one of --field and --particles');
@@ -86,10 +101,12 @@ export function registerMockBox(program: Command): void {
           shotNoise: 0,
         };
         let about: Record<string, number> = {};
+        let fiducial = opts.cosmology === undefined ? undefined : cosmologyFile(opts.cosmology);
         let measurement;
         if (opts.field !== undefined) {
           const field = readMeshField(opts.field);
           about = { ...field.about };
+          fiducial ??= field.cosmology;
           const shotNoise = opts.shotNoise === undefined ? 0 : parsed('shot-noise', opts.shotNoise, (x) => x >= 0);
           measurement = measureMeshValues(field.values, planOf(field.mesh, { ...bins, shotNoise }));
         } else {
@@ -102,8 +119,9 @@ export function registerMockBox(program: Command): void {
         }
         const numberDensity = opts.numberDensity !== undefined ? parsed('number-density', opts.numberDensity, (x) => x > 0) : about.numberDensity;
         if (numberDensity === undefined) throw new InputError('measure-box: the bundle needs a number density: pass --number-density');
+        if (fiducial === undefined) throw new InputError('measure-box: the bundle needs a fiducial cosmology: pass --cosmology <file.json>');
         const redshift = opts.redshift !== undefined ? parsed('redshift', opts.redshift, (x) => x >= 0) : (about.redshift ?? 0);
-        writeMeasurementBundle(opts.out, boxBundle(measurement, { redshift, numberDensity, fiducialCosmology: {}, description: `measured by treble measure-box from ${opts.field ?? opts.particles}` }));
+        writeMeasurementBundle(opts.out, boxBundle(measurement, { redshift, numberDensity, fiducialCosmology: fiducial, description: `measured by treble measure-box from ${opts.field ?? opts.particles}` }));
         process.stdout.write(`wrote the measurement bundle ${opts.out}\n`);
       }),
     );
