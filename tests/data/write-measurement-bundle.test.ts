@@ -2,6 +2,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
+import { readCovarianceMatrix } from '../../src/data/covariance/matrix-file.js';
 import { loadMeasurementBundle } from '../../src/data/measurement-bundle.js';
 import { writeMeasurementBundle } from '../../src/data/write-measurement-bundle.js';
 
@@ -35,5 +36,8 @@ describe('writing a measurement bundle', () => {
     expect(bundle.dataVector.entries.map((e) => e.block)).toEqual(['P0', 'P0', 'P0', 'P2', 'P2', 'P2', 'B0', 'B0']);
     expect(bundle.dataVector.entries[7].kEffective).toEqual([0.021, 0.0199, 0.0101]);
     expect(bundle.metadata.covarianceMatrix).toBe('covariance.csv');
+    const cov = readCovarianceMatrix(join(dir, 'covariance.csv'), 'covariance.csv', bundle.dataVector.entries);
+    expect(cov[9]).toBe(10);
+    expect(cov[1]).toBe(0);
   });
 });
