@@ -39,18 +39,28 @@ export interface FisherMatrix {
   readonly warnings: readonly string[];
 }
 
-function defaultStep(value: number): number {
+export function defaultStep(value: number): number {
   return value === 0 ? 0.01 : 0.01 * Math.abs(value);
 }
 
-function centralDifference(setup: FisherSetup, name: string, h: number): Float64Array {
-  const up = { ...setup.fiducial, [name]: setup.fiducial[name] + h };
-  const down = { ...setup.fiducial, [name]: setup.fiducial[name] - h };
-  const mUp = setup.model(up);
-  const mDown = setup.model(down);
+function centralDifference(model: ModelVectorFunction, fiducial: Readonly<Record<string, number>>, name: string, h: number): Float64Array {
+  const mUp = model({ ...fiducial, [name]: fiducial[name] + h });
+  const mDown = model({ ...fiducial, [name]: fiducial[name] - h });
   const d = new Float64Array(mUp.length);
   for (let i = 0; i < d.length; i++) d[i] = (mUp[i] - mDown[i]) / (2 * h);
   return d;
+}
+
+/**
+ * Central differences at steps h and h/2 and their Richardson combination
+ * (4 D(h/2) - D(h)) / 3, the derivative fisherMatrix uses.
+ */
+export function twoStepDerivative(model: ModelVectorFunction, fiducial: Readonly<Record<string, number>>, name: string, h: number): { derivative: Float64Array; coarse: Float64Array; fine: Float64Array } {
+  const coarse = centralDifference(model, fiducial, name, h);
+  const fine = centralDifference(model, fiducial, name, h / 2);
+  const derivative = new Float64Array(fine.length);
+  for (let i = 0; i < derivative.length; i++) derivative[i] = (4 * fine[i] - coarse[i]) / 3;
+  return { derivative, coarse, fine };
 }
 
 function dot(a: Float64Array, b: Float64Array): number {
@@ -78,14 +88,10 @@ export function fisherMatrix(setup: FisherSetup): FisherMatrix {
     } else {
       const h = setup.steps?.[name] ?? defaultStep(value);
       if (!(h > 0)) throw new InputError(`Fisher matrix: step for "${name}" must be positive, got ${h}`);
-      const coarse = centralDifference(setup, name, h);
-      const fine = centralDifference(setup, name, h / 2);
-      d = new Float64Array(fine.length);
+      const { derivative, coarse, fine } = twoStepDerivative(setup.model, setup.fiducial, name, h);
+      d = derivative;
       const diff = new Float64Array(fine.length);
-      for (let i = 0; i < d.length; i++) {
-        d[i] = (4 * fine[i] - coarse[i]) / 3;
-        diff[i] = fine[i] - coarse[i];
-      }
+      for (let i = 0; i < d.length; i++) diff[i] = fine[i] - coarse[i];
       const normFine = Math.sqrt(Math.max(dot(fine, setup.precision(fine)), 0));
       const normDiff = Math.sqrt(Math.max(dot(diff, setup.precision(diff)), 0));
       if (normFine > 0 && normDiff / normFine > tolerance) {
