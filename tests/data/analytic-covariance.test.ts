@@ -69,13 +69,19 @@ describe('covariance choices', () => {
     // Ordered triples q1 + q2 + q3 = 0 with q_a in the half-open shells of the bin, by brute force.
     const count = (k: number[]) => {
       const shells = k.map((c) => latticeShell(1000, c - 0.01, c + 0.01));
-      const third = new Set<string>();
-      for (let v = 0; v < shells[2].count; v++) third.add(String([0, 1, 2].map((a) => shells[2].vectors[3 * v + a])));
+      const side = 129;
+      const at = (x: number, y: number, z: number) => ((x + 64) * side + (y + 64)) * side + (z + 64);
+      const third = new Uint8Array(side ** 3);
+      const v3 = shells[2].vectors;
+      for (let v = 0; v < shells[2].count; v++) third[at(v3[3 * v], v3[3 * v + 1], v3[3 * v + 2])] = 1;
+      const [v1, v2] = [shells[0].vectors, shells[1].vectors];
       let total = 0;
       for (let a = 0; a < shells[0].count; a++) {
         for (let b = 0; b < shells[1].count; b++) {
-          const q3 = [0, 1, 2].map((c) => -shells[0].vectors[3 * a + c] - shells[1].vectors[3 * b + c]);
-          if (third.has(String(q3))) total++;
+          const x = -v1[3 * a] - v2[3 * b];
+          const y = -v1[3 * a + 1] - v2[3 * b + 1];
+          const z = -v1[3 * a + 2] - v2[3 * b + 2];
+          if (Math.abs(x) <= 64 && Math.abs(y) <= 64 && Math.abs(z) <= 64) total += third[at(x, y, z)];
         }
       }
       return total;
