@@ -76,11 +76,14 @@ export function secondOrderGalaxySpectrum(linear: Float64Array, mesh: Mesh, bias
   const tt = new Float64Array(size); // t_ij t_ij
   for (let x = 0; x < size; x++) dd[x] = d[x] * d[x];
   const axes: ((kx: number, ky: number, kz: number) => number)[] = [(kx) => kx, (_x, ky) => ky, (_x, _y, kz) => kz];
+  const psis: Float64Array[] = [];
   for (const ki of axes) {
     const g = toReal((kx, ky, kz) => [0, ki(kx, ky, kz)]);
     const psi = toReal((kx, ky, kz, k2) => [0, ki(kx, ky, kz) / k2]);
     for (let x = 0; x < size; x++) shift[x] += g[x] * psi[x];
+    psis.push(psi);
   }
+  const psiZ = psis[2];
   for (let i = 0; i < 3; i++) {
     for (let j = i; j < 3; j++) {
       const t = toReal((kx, ky, kz, k2) => [(axes[i](kx, ky, kz) * axes[j](kx, ky, kz)) / k2, 0]);
@@ -94,7 +97,6 @@ export function secondOrderGalaxySpectrum(linear: Float64Array, mesh: Mesh, bias
     local[x] = b1 * ((5 / 7) * dd[x] - shift[x] + (2 / 7) * tt[x]) + 0.5 * b2 * dd[x] + bG2 * (tt[x] - dd[x]);
     growth[x] = (3 / 7) * dd[x] - shift[x] + (4 / 7) * tt[x];
   }
-  const psiZ = toReal((_x, _y, kz, k2) => [0, kz / k2]);
   const v = toReal((_x, _y, kz, k2) => [b1 + (f * kz * kz) / k2, 0]);
   const flow = new Float64Array(size);
   for (let x = 0; x < size; x++) flow[x] = psiZ[x] * v[x];
