@@ -1,3 +1,5 @@
+import { readFileSync } from 'node:fs';
+import { dirname, resolve } from 'node:path';
 import { InputError, InputErrors } from '../../contracts/input-error.js';
 import type { ParameterValues } from '../../contracts/statistic-model.js';
 import { backgroundOf } from '../../cosmology/background.js';
@@ -78,6 +80,21 @@ function modelSource(o: JointLikelihoodOptions, bundle: MeasurementBundle, build
     },
     build,
   );
+}
+
+/**
+ * Read likelihood options from a JSON file; a relative `bundle` path is taken
+ * relative to the file's folder (so the options can be handed to workers as is).
+ */
+export function readJointLikelihoodOptions(path: string): JointLikelihoodOptions {
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(readFileSync(path, 'utf8'));
+  } catch (e) {
+    throw new InputError(`${path}: cannot read the likelihood options (${(e as Error).message})`, { where: path });
+  }
+  checkTopLevel(parsed);
+  return { ...parsed, bundle: resolve(dirname(path), parsed.bundle) };
 }
 
 /** Build the likelihood from JSON options; `build` overrides the bundle's default models (tests). */

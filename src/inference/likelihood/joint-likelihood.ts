@@ -163,6 +163,27 @@ export class JointLikelihood {
     return Number.isFinite(ll) ? lp + ll : -Infinity;
   }
 
+  /**
+   * Data, model and errors of the kept entries at theta, with the marginalised
+   * parameters at their best fit (for residual plots and tables).
+   */
+  residualsAt(theta: Float64Array): { entries: DataSelection['entries']; data: Float64Array; model: Float64Array; sigma: Float64Array } {
+    const values = this.parameters.values(theta);
+    const prepared = this.source.prepare(values);
+    const model = this.compositeFor(prepared.models);
+    let full: Float64Array;
+    if (this.linearNames.length === 0) full = model.evaluate(prepared.modelValues);
+    else {
+      const best = this.core(values).result.bestFit;
+      const part = model.linearPart(prepared.modelValues, this.linearNames);
+      full = Float64Array.from(part.offset);
+      part.columns.forEach((c, j) => c.forEach((v, i) => (full[i] += best[j] * v)));
+    }
+    const n = this.size;
+    const sigma = Float64Array.from({ length: n }, (_, a) => Math.sqrt(this.covariance.matrix[a * n + a]));
+    return { entries: this.selection.entries, data: selectVector(this.bundle.dataVector.values, this.selection.indices), model: selectVector(full, this.selection.indices), sigma };
+  }
+
   /** The choices behind this likelihood, for printing with a fit. */
   describe(): LikelihoodDescription {
     const blocks = Object.entries(this.selection.perBlock).map(([b, t]) => `${b} ${t.kept}/${t.total}`);

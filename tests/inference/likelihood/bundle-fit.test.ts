@@ -1,4 +1,4 @@
-import { mkdtempSync } from 'node:fs';
+import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
@@ -9,7 +9,7 @@ import { PLANCK_2018, validateCosmology } from '../../../src/cosmology/cosmology
 import { linearPowerFromCosmology } from '../../../src/cosmology/linear-power-from-cosmology.js';
 import { binVolumeTriangleCount, continuousModeCount } from '../../../src/data/index.js';
 import { writeMeasurementBundle } from '../../../src/data/write-measurement-bundle.js';
-import { createJointLikelihood, createJointLogPosterior } from '../../../src/inference/likelihood/joint-likelihood-options.js';
+import { createJointLikelihood, createJointLogPosterior, readJointLikelihoodOptions } from '../../../src/inference/likelihood/joint-likelihood-options.js';
 import { scaledSpectrum } from '../../../src/inference/likelihood/model-source.js';
 import { loadLogPosterior } from '../../../src/inference/sampling/load-log-posterior.js';
 import { normalizeLogPosteriorReference } from '../../../src/inference/sampling/log-posterior-reference.js';
@@ -151,6 +151,18 @@ describe('likelihood with the power and bispectrum models on a bundle', () => {
     expect(q.power(0.1) / spectrum.power(0.1)).toBeCloseTo(1.1025, 12);
     expect(q.powerNoWiggle(0.1) / spectrum.powerNoWiggle(0.1)).toBeCloseTo(1.1025, 12);
     expect(q.sigma2BAO / spectrum.sigma2BAO).toBeCloseTo(1.1025, 12);
+  });
+
+  it('reads its options from a JSON file with the bundle path relative to it, and gives residuals at a point', () => {
+    const file = join(dir, 'fit.json');
+    writeFileSync(file, JSON.stringify({ ...templateOptions, bundle: '.' }));
+    const fromFile = createJointLikelihood(readJointLikelihoodOptions(file));
+    const theta = Float64Array.from([1.9, fs8]);
+    expect(fromFile.logPosterior(theta)).toBe(L.logPosterior(theta));
+    const r = fromFile.residualsAt(theta);
+    expect(r.entries).toHaveLength(L.size);
+    r.data.forEach((d, i) => expect(Math.abs(d - r.model[i])).toBeLessThan(1e-6 * r.sigma[i]));
+    expect(() => readJointLikelihoodOptions(join(dir, 'missing.json'))).toThrow(/missing\.json: cannot read the likelihood options/);
   });
 
   it('refuses a configuration missing the template parameters', () => {
