@@ -1,7 +1,6 @@
 export * from './scale-cuts/theory-error-covariance.js';
 export * from './forecast/survey.js';
 export * from './synthetic/synthetic-bundle.js';
-export * from './forecast/binning-bundle.js';
 export * from './forecast/bin-forecast-setup.js';
 export * from './forecast/bin-fisher-set.js';
 export * from './forecast/forecast-spec.js';
@@ -18,3 +17,5 @@ export * from './fit/model-at-point.js';
 export * from './fit/fit-summary.js';
 export * from './fit/run-fit.js';
 export * from './forecast/bispectrum-sensitivity.js';
+export * from './fit/parameter-labels.js';
+export * from './fit/fit-report.js';

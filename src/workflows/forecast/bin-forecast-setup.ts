@@ -10,12 +10,14 @@ import { SourceModelVector } from '../../inference/fisher/source-model-vector.js
 import { apDilations } from '../../inference/likelihood/alcock-paczynski-dilations.js';
 import { bundleModels, type BundleModelOptions } from '../../inference/likelihood/bundle-models.js';
 import { fullCosmologySource } from '../../inference/likelihood/model-source.js';
-import { binningBundle, type ShellBinning } from './binning-bundle.js';
+import { shellGrid } from '../../bispectrum/triangle-bins.js';
+import { syntheticBundle } from '../synthetic/synthetic-bundle.js';
 import type { SurveyBin } from './survey.js';
 
 /**
  * The model side of a forecast for one redshift bin: an in-memory bundle on
- * the forecast bins, the model vector through a full-cosmology model source
+ * the forecast bins (syntheticBundle, data = the model at the fiducial point;
+ * survey-volume mode counts and mean wavenumbers), the model vector through a full-cosmology model source
  * (cosmology parameters rebuild the linear spectrum and so the growth rate f,
  * and move the AP dilations relative to the fiducial background, as in a
  * full-mode fit), the fiducial point, and the analytic Gaussian covariance
@@ -25,6 +27,14 @@ import type { SurveyBin } from './survey.js';
  * bispectrum's largest k (or, without P bins, are P_0 on the triangle
  * shells); P entries beyond the power kMax enter only that variance.
  */
+/** Shell centres kMin, kMin + dk, ... up to kMax (h/Mpc), and the multipoles. */
+export interface ShellBinning {
+  readonly kMin: number;
+  readonly kMax: number;
+  readonly dk: number;
+  readonly multipoles: readonly number[];
+}
+
 export interface BinForecastInputs {
   readonly bin: SurveyBin;
   readonly cosmology: Readonly<Record<string, number>>;
@@ -57,11 +67,25 @@ export function binForecastSetup(inp: BinForecastInputs): BinForecastSetup {
   const { bin } = inp;
   const label = inp.label ?? 'survey bin';
   const b = inp.bispectrum;
-  const covered = inp.power ? { ...inp.power, kMax: Math.max(inp.power.kMax, b?.kMax ?? 0) } : b && { ...b, multipoles: [0] };
-  const bundle = binningBundle({ redshift: bin.zEff, numberDensity: bin.nbar, volume: bin.volume, fiducialCosmology: inp.cosmology, power: covered, bispectrum: b, label });
+  if (!(bin.volume > 0) || !Number.isFinite(bin.volume)) throw new InputError(`${label}: volume must be positive, got ${bin.volume}`, { where: 'volume' });
+  if (!(bin.nbar > 0) || !Number.isFinite(bin.nbar)) throw new InputError(`${label}: nbar must be positive, got ${bin.nbar}`, { where: 'nbar' });
+  if (!inp.power && !b) throw new InputError(`${label}: neither power nor bispectrum bins were given`);
+  const covered = inp.power ? { ...inp.power, kMax: Math.max(inp.power.kMax, b?.kMax ?? 0) } : { ...(b as ShellBinning), multipoles: [0] };
   const powerKMax = (inp.power?.kMax ?? -1) * (1 + 1e-9);
   const cosmologyNames = inp.names.filter((n) => n in COSMOLOGY_FIELDS);
   const fiducialCosmology = validateCosmology(inp.cosmology, { path: 'cosmology' });
+  const { bundle } = syntheticBundle(
+    {
+      description: label,
+      redshift: bin.zEff,
+      numberDensity: bin.nbar,
+      surveyVolume: bin.volume,
+      fiducialCosmology: inp.cosmology,
+      power: { kMin: covered.kMin, dk: covered.dk, count: shellGrid(covered.kMin, covered.kMax, covered.dk).count, multipoles: covered.multipoles },
+      bispectrum: b,
+    },
+    { spectrum: linearPowerFromCosmology(fiducialCosmology, bin.zEff, inp.linearPower), parameters: { ...bin.bias, ...inp.nuisance }, models: inp.models },
+  );
   const fiducialBackground = backgroundOf(fiducialCosmology);
   const source = fullCosmologySource(
     cosmologyNames,

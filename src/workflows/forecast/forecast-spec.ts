@@ -1,7 +1,7 @@
 import { InputErrors } from '../../contracts/input-error.js';
 import type { LinearPowerOptions } from '../../cosmology/linear-power-from-cosmology.js';
 import type { BundleModelOptions } from '../../inference/likelihood/bundle-models.js';
-import type { ShellBinning } from './binning-bundle.js';
+import type { ShellBinning } from './bin-forecast-setup.js';
 
 /**
  * A Fisher forecast, as JSON (validated with every problem listed at once):
