@@ -19,3 +19,5 @@ export * from './fit/run-fit.js';
 export * from './forecast/bispectrum-sensitivity.js';
 export * from './fit/parameter-labels.js';
 export * from './fit/fit-report.js';
+export * from './forecast/forecast-report.js';
+export * from './scale-cuts/scan-report.js';
