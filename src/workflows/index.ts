@@ -21,3 +21,7 @@ export * from './fit/parameter-labels.js';
 export * from './fit/fit-report.js';
 export * from './forecast/forecast-report.js';
 export * from './scale-cuts/scan-report.js';
+export * from './forecast/survey-sensitivity.js';
+export * from './scale-cuts/scan-config.js';
+export * from './fit/best-fit.js';
+export * from './demo/run-demo.js';
