@@ -8,7 +8,7 @@ import type { TriangleBins } from './triangle-bins.js';
 import type { TriangleNodeSet } from './triangle-node-set.js';
 import { combineTreeTemplates } from './tree-template-combination.js';
 import { TreeDirectIntegrand } from './tree-direct-integrand.js';
-import { TreeTemplateIntegrand } from './tree-template-integrand.js';
+import { TreeMultipoleEvaluator } from './tree-multipole-evaluator.js';
 import type { TreeBispectrumParameters } from './tree-template-terms.js';
 import { TabulatedSpectrum } from './tabulated-spectrum.js';
 import {
@@ -91,6 +91,7 @@ export class TreeBispectrumModel implements StatisticModel {
   private readonly userRule: OrientationRule | undefined;
   private cacheKey = '';
   private table: TabulatedSpectrum | undefined;
+  private readonly evaluators = new Map<string, TreeMultipoleEvaluator>();
   private readonly kLo: number;
   private readonly kHi: number;
   private cachedTemplates: Float64Array | undefined;
@@ -140,7 +141,7 @@ export class TreeBispectrumModel implements StatisticModel {
     const key = NON_POLYNOMIAL.map((n) => params[n] ?? this.defaults[n]).join('|');
     if (this.cachedTemplates && key === this.cacheKey) return this.cachedTemplates;
     const { settings, rule } = this.prepare(params);
-    this.cachedTemplates = averageOverTriangleNodes(this.nodes, new TreeTemplateIntegrand(settings), this.multipoles, rule);
+    this.cachedTemplates = this.evaluatorFor(rule).templates(settings, false);
     this.cacheKey = key;
     return this.cachedTemplates;
   }
@@ -154,6 +155,17 @@ export class TreeBispectrumModel implements StatisticModel {
     const out = new Float64Array(nb * nm);
     for (let b = 0; b < nb; b++) for (let m = 0; m < nm; m++) out[m * nb + b] = avg[b * nm + m];
     return out;
+  }
+
+  /** Geometry (pair kernels, Legendre weights) per orientation rule, built once. */
+  private evaluatorFor(rule: OrientationRule): TreeMultipoleEvaluator {
+    const key = `${rule.muCount}x${rule.phiCount}`;
+    let hit = this.evaluators.get(key);
+    if (!hit) {
+      hit = new TreeMultipoleEvaluator(this.nodes, this.multipoles, rule);
+      this.evaluators.set(key, hit);
+    }
+    return hit;
   }
 
   private prepare(params: ParameterValues): { settings: ResolvedTreeSettings; rule: OrientationRule } {

@@ -5,12 +5,14 @@ import { TabulatedSpectrum } from './tabulated-spectrum.js';
 import type { TriangleNodeSet } from './triangle-node-set.js';
 import { TreeDirectIntegrand } from './tree-direct-integrand.js';
 import type { TreeBispectrumParameters } from './tree-template-terms.js';
-import { checkWavenumbersInTable, resolveTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
+import { addPairTemplates, TreeTemplateIntegrand } from './tree-template-integrand.js';
+import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
+import { checkWavenumbersInTable, resolveTreeSettings, type ResolvedTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
 
 /**
- * Full evaluation of B_l on a fixed geometry (bin nodes, orientation rule,
- * multipoles) for a new linear spectrum and parameters: the direct path made
- * fast. Geometry that does not depend on cosmology (cosines between the sides,
+ * Full evaluation of B_l — or of the averaged templates — on a fixed geometry
+ * (bin nodes, orientation rule, multipoles) for a new linear spectrum: the
+ * averages of TreeDirectIntegrand and TreeTemplateIntegrand made fast. Geometry that does not depend on cosmology (cosines between the sides,
  * F2, G2 and sigma^2 of each pair at each node, Legendre weights) is built once
  * in the constructor. Per evaluation the spectrum is re-tabulated
  * (TabulatedSpectrum) and, without AP distortion, P_nw and the damped-at-mu=0
@@ -21,7 +23,8 @@ import { checkWavenumbersInTable, resolveTreeSettings, type TreeBispectrumSettin
  * (ir-resummed-power.ts), the kernels' mu terms and the fingers-of-god factor.
  * With AP distortion the wavenumbers change with orientation and it falls back
  * to the generic average of TreeDirectIntegrand on the tabulated spectrum.
- * Output layout [multipole][bin], as combineTreeTemplates.
+ * Output layouts: B_l [multipole][bin] as combineTreeTemplates; templates
+ * [bin][multipole][value] as the averagers.
  */
 export class TreeMultipoleEvaluator {
   readonly nodes: TriangleNodeSet;
@@ -69,13 +72,9 @@ export class TreeMultipoleEvaluator {
     this.kHi = hi;
   }
 
-  evaluate(settings: TreeBispectrumSettings, params: TreeBispectrumParameters): Float64Array {
-    const s0 = resolveTreeSettings(settings);
-    checkWavenumbersInTable(s0, this.kLo, this.kHi, 'bispectrum evaluation');
-    const aMin = Math.min(s0.alphaPar, s0.alphaPerp);
-    const aMax = Math.max(s0.alphaPar, s0.alphaPerp);
-    const tab = new TabulatedSpectrum(s0.spectrum, this.kLo / aMax, this.kHi / aMin);
-    const s = { ...s0, spectrum: tab };
+  /** B_l, layout [multipole][bin]; `tabulate` false uses the spectrum as given. */
+  evaluate(settings: TreeBispectrumSettings | ResolvedTreeSettings, params: TreeBispectrumParameters, tabulate = true): Float64Array {
+    const s = this.prepare(settings, tabulate);
     const nb = this.nodes.binCount;
     const nm = this.multipoles.length;
     if (s.alphaPar !== 1 || s.alphaPerp !== 1) {
@@ -84,17 +83,95 @@ export class TreeMultipoleEvaluator {
       for (let b = 0; b < nb; b++) for (let m = 0; m < nm; m++) out[m * nb + b] = avg[b * nm + m];
       return out;
     }
-    return this.undistorted(tab, s.irResummation, s.fForBaoDamping, s.velocityDispersion, s.inverseDensity, params);
+    return this.undistorted(s, params);
   }
 
-  private undistorted(
-    tab: TabulatedSpectrum,
-    ir: boolean,
-    fd: number,
-    sigmaV: number,
-    n1: number,
-    p: TreeBispectrumParameters,
-  ): Float64Array {
+  /** Averaged templates [bin][multipole][value] (tree-template-terms.ts), as averaging TreeTemplateIntegrand. */
+  templates(settings: TreeBispectrumSettings | ResolvedTreeSettings, tabulate = true): Float64Array {
+    const s = this.prepare(settings, tabulate);
+    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return averageOverTriangleNodes(this.nodes, new TreeTemplateIntegrand(s), this.multipoles, this.rule);
+    return this.undistortedTemplates(s);
+  }
+
+  private prepare(settings: TreeBispectrumSettings | ResolvedTreeSettings, tabulate: boolean): ResolvedTreeSettings {
+    const s0 = 'inverseDensity' in settings ? settings : resolveTreeSettings(settings);
+    checkWavenumbersInTable(s0, this.kLo, this.kHi, 'bispectrum evaluation');
+    if (!tabulate) return s0;
+    const aMin = Math.min(s0.alphaPar, s0.alphaPerp);
+    const aMax = Math.max(s0.alphaPar, s0.alphaPerp);
+    return { ...s0, spectrum: new TabulatedSpectrum(s0.spectrum, this.kLo / aMax, this.kHi / aMin) };
+  }
+
+  /** Per node: P_nw and the wiggle damped by exp(-k^2 Sigma^2) of the three sides, into sides[0..5]. */
+  private sidePowers(s: ResolvedTreeSettings, i: number, sides: Float64Array): void {
+    sidePower(s, this.nodes.k1[i], 0, sides);
+    sidePower(s, this.nodes.k2[i], 1, sides);
+    sidePower(s, this.nodes.k3[i], 2, sides);
+  }
+
+  private undistortedTemplates(s: ResolvedTreeSettings): Float64Array {
+    const { k1: K1, k2: K2, k3: K3, weight, start, binCount } = this.nodes;
+    const nm = this.multipoles.length;
+    const T = TREE_TEMPLATE_SIZE;
+    const out = new Float64Array(binCount * nm * T);
+    const { mu1: M1, sinMu1, cosPhi } = this.rule;
+    const nOrient = M1.length;
+    const wl = this.weights;
+    const fd = s.fForBaoDamping;
+    const aIR = fd * (2 + fd) * s.spectrum.sigma2BAO - fd * fd * s.spectrum.deltaSigma2BAO;
+    const cIR = fd * fd * s.spectrum.deltaSigma2BAO;
+    const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
+    const n1 = s.inverseDensity;
+    const sides = new Float64Array(6);
+    const v = new Float64Array(T);
+    const pk = this.pairKernels;
+    for (let bin = 0; bin < binCount; bin++) {
+      const base = bin * nm * T;
+      for (let i = start[bin]; i < start[bin + 1]; i++) {
+        const k1 = K1[i];
+        const k2 = K2[i];
+        const k3 = K3[i];
+        const c12 = this.cos12[i];
+        const s12 = this.sin12[i];
+        const o9 = 9 * i;
+        this.sidePowers(s, i, sides);
+        const wn = weight[i];
+        for (let o = 0; o < nOrient; o++) {
+          const m1 = M1[o];
+          const m2 = m1 * c12 - sinMu1[o] * s12 * cosPhi[o];
+          const m3 = -(k1 * m1 + k2 * m2) / k3;
+          const q1 = m1 * m1;
+          const q2 = m2 * m2;
+          const q3 = m3 * m3;
+          const P1 = s.irResummation ? sides[0] + sides[3] * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : sides[0] + sides[3];
+          const P2 = s.irResummation ? sides[1] + sides[4] * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : sides[1] + sides[4];
+          const P3 = s.irResummation ? sides[2] + sides[5] * Math.exp(-k3 * k3 * q3 * (aIR + cIR * q3)) : sides[2] + sides[5];
+          v.fill(0, 0, 14);
+          addPairTemplates(v, 0, 2 * P1 * P2, k1, k2, m1, m2, m3, pk[o9], pk[o9 + 1], pk[o9 + 2]);
+          addPairTemplates(v, 0, 2 * P2 * P3, k2, k3, m2, m3, m1, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5]);
+          addPairTemplates(v, 0, 2 * P3 * P1, k3, k1, m3, m1, m2, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8]);
+          const damp = halfSv2 > 0 ? Math.exp(-halfSv2 * (k1 * k1 * q1 + k2 * k2 * q2 + k3 * k3 * q3)) : 1;
+          for (let t = 0; t < 14; t++) v[t] *= damp;
+          v[14] = n1 * (P1 + P2 + P3);
+          v[15] = n1 * (q1 * P1 + q2 * P2 + q3 * P3);
+          v[16] = n1 * n1;
+          for (let m = 0; m < nm; m++) {
+            const w = wn * wl[o * nm + m];
+            const row = base + m * T;
+            for (let t = 0; t < T; t++) out[row + t] += w * v[t];
+          }
+        }
+      }
+    }
+    return out;
+  }
+
+  private undistorted(s: ResolvedTreeSettings, p: TreeBispectrumParameters): Float64Array {
+    const ir = s.irResummation;
+    const fd = s.fForBaoDamping;
+    const sigmaV = s.velocityDispersion;
+    const n1 = s.inverseDensity;
+    const sides = new Float64Array(6);
     const { k1: K1, k2: K2, k3: K3, weight, start, binCount } = this.nodes;
     const nm = this.multipoles.length;
     const out = new Float64Array(binCount * nm);
@@ -103,8 +180,8 @@ export class TreeMultipoleEvaluator {
     const nPhi = this.rule.phiCount;
     const wl = this.weights;
     const { b1, b2, bG2, f } = p;
-    const sig2 = tab.sigma2BAO;
-    const dsig2 = tab.deltaSigma2BAO;
+    const sig2 = s.spectrum.sigma2BAO;
+    const dsig2 = s.spectrum.deltaSigma2BAO;
     const aIR = fd * (2 + fd) * sig2 - fd * fd * dsig2;
     const cIR = fd * fd * dsig2;
     const halfSv2 = 0.5 * sigmaV * sigmaV;
@@ -121,13 +198,13 @@ export class TreeMultipoleEvaluator {
         const s12 = this.sin12[i];
         const pk = this.pairKernels;
         const o9 = 9 * i;
-        // Side powers: no-wiggle part and wiggle damped by exp(-k^2 Sigma^2).
-        const n1k = tab.powerNoWiggle(k1);
-        const n2k = tab.powerNoWiggle(k2);
-        const n3k = tab.powerNoWiggle(k3);
-        const w1k = ir ? tab.powerWiggle(k1) * Math.exp(-k1 * k1 * sig2) : tab.powerWiggle(k1);
-        const w2k = ir ? tab.powerWiggle(k2) * Math.exp(-k2 * k2 * sig2) : tab.powerWiggle(k2);
-        const w3k = ir ? tab.powerWiggle(k3) * Math.exp(-k3 * k3 * sig2) : tab.powerWiggle(k3);
+        this.sidePowers(s, i, sides);
+        const n1k = sides[0];
+        const n2k = sides[1];
+        const n3k = sides[2];
+        const w1k = sides[3];
+        const w2k = sides[4];
+        const w3k = sides[5];
         const wn = weight[i];
         // Orientation points are mu-major: side 1's damping factors change only with the mu node.
         let P1 = 0;
@@ -183,4 +260,12 @@ function pairZ2(
 ): number {
   const muK = ma * ka + mb * kb;
   return b1 * F + f * qc * G + 0.5 * f * muK * ((ma / ka) * (b1 + f * qb) + (mb / kb) * (b1 + f * qa)) + 0.5 * b2 + bG2 * S;
+}
+
+/** P_nw(k) into sides[j] and P_w(k), damped by exp(-k^2 Sigma^2) when IR-resummed, into sides[3 + j]. */
+function sidePower(s: ResolvedTreeSettings, k: number, j: number, sides: Float64Array): void {
+  const nw = s.spectrum.powerNoWiggle(k);
+  const w = s.spectrum.power(k) - nw;
+  sides[j] = nw;
+  sides[3 + j] = s.irResummation ? w * Math.exp(-k * k * s.spectrum.sigma2BAO) : w;
 }

@@ -44,35 +44,53 @@ function addPair(s: Float64Array, a: number, b: number, c: number, out: Float64A
   const qa = s[a];
   const qb = s[b];
   const qc = s[c];
-  const na = s[3 + a];
-  const nb = s[3 + b];
-  const nc = s[3 + c];
-  const w = 2 * s[6 + a] * s[6 + b];
   const cosAB = (qc * qc - qa * qa - qb * qb) / (2 * qa * qb);
-  // The sum vector q_a + q_b = -q_c: its cosine squared is nu_c^2 and mu k = nu_a q_a + nu_b q_b.
+  const F = kernelF2(qa, qb, cosAB);
+  const G = kernelG2(qa, qb, cosAB);
+  const S = kernelGalileonTidal(cosAB);
+  addPairTemplates(out, o, 2 * s[6 + a] * s[6 + b], qa, qb, s[3 + a], s[3 + b], s[3 + c], F, G, S);
+}
+
+/**
+ * The monomial split of w Z1(q_a) Z1(q_b) Z2(q_a, q_b) added to out[o + 0..13],
+ * given the pair's F2, G2 and sigma^2 and the cosines nu_a, nu_b, nu_c with the
+ * line of sight (the sum vector q_a + q_b = -q_c has cosine squared nu_c^2 and
+ * mu k = nu_a q_a + nu_b q_b). Z2 = b1 (F2 + f A1) + f nu_c^2 G2 + f^2 A2 + b2/2 + bG2 sigma^2.
+ */
+export function addPairTemplates(
+  out: Float64Array,
+  o: number,
+  w: number,
+  qa: number,
+  qb: number,
+  na: number,
+  nb: number,
+  nc: number,
+  F: number,
+  G: number,
+  S: number,
+): void {
   const muK = na * qa + nb * qb;
   const na2 = na * na;
   const nb2 = nb * nb;
-  const zB1 = kernelF2(qa, qb, cosAB);
   const zB1f = 0.5 * muK * (na / qa + nb / qb);
-  const zF = nc * nc * kernelG2(qa, qb, cosAB);
+  const zF = nc * nc * G;
   const zF2 = 0.5 * muK * ((na * nb2) / qa + (nb * na2) / qb);
-  const zS = kernelGalileonTidal(cosAB);
   const u0 = w;
   const u1 = w * (na2 + nb2);
   const u2 = w * na2 * nb2;
-  out[o] += u0 * zB1;
+  out[o] += u0 * F;
   out[o + 1] += u0 * zB1f;
-  out[o + 2] += u0 * zF + u1 * zB1;
+  out[o + 2] += u0 * zF + u1 * F;
   out[o + 3] += u0 * zF2 + u1 * zB1f;
-  out[o + 4] += u1 * zF + u2 * zB1;
+  out[o + 4] += u1 * zF + u2 * F;
   out[o + 5] += u1 * zF2 + u2 * zB1f;
   out[o + 6] += u2 * zF;
   out[o + 7] += u2 * zF2;
   out[o + 8] += 0.5 * u0;
   out[o + 9] += 0.5 * u1;
   out[o + 10] += 0.5 * u2;
-  out[o + 11] += u0 * zS;
-  out[o + 12] += u1 * zS;
-  out[o + 13] += u2 * zS;
+  out[o + 11] += u0 * S;
+  out[o + 12] += u1 * S;
+  out[o + 13] += u2 * S;
 }

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { continuousBinNodes } from '../../src/bispectrum/continuous-bin-nodes.js';
+import { averageOverTriangleNodes } from '../../src/bispectrum/orientation-average.js';
 import { orientationRule } from '../../src/bispectrum/orientation-rule.js';
+import { TreeTemplateIntegrand } from '../../src/bispectrum/tree-template-integrand.js';
 import { TabulatedSpectrum } from '../../src/bispectrum/tabulated-spectrum.js';
 import { TreeBispectrumModel } from '../../src/bispectrum/tree-bispectrum-model.js';
 import { TreeMultipoleEvaluator } from '../../src/bispectrum/tree-multipole-evaluator.js';
@@ -31,6 +33,19 @@ describe('fast full evaluation (TreeMultipoleEvaluator)', () => {
       for (let i = 0; i < fast.length; i++) expect(Math.abs(fast[i] / slow[i] - 1)).toBeLessThan(1e-10);
     });
   }
+});
+
+describe('fast templates (TreeMultipoleEvaluator.templates)', () => {
+  it('equal the generic average of TreeTemplateIntegrand to 1e-12, with damping, IR and stochastic terms', () => {
+    const bins = enumerateTriangleBins(shellGrid(0.02, 0.08, 0.02));
+    const nodes = continuousBinNodes(bins, 3);
+    const rule = orientationRule(4, 6);
+    const settings = { spectrum, numberDensity: 2e-4, velocityDispersion: 3 };
+    const fast = new TreeMultipoleEvaluator(nodes, [0, 2], rule).templates(settings, false);
+    const generic = averageOverTriangleNodes(nodes, new TreeTemplateIntegrand(settings), [0, 2], rule);
+    expect(fast.length).toBe(generic.length);
+    for (let i = 0; i < fast.length; i++) expect(Math.abs(fast[i] - generic[i])).toBeLessThanOrEqual(1e-12 * Math.abs(generic[i]) + 1e-300);
+  });
 });
 
 describe('tabulated spectrum', () => {
