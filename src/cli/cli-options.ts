@@ -19,3 +19,19 @@ export function parameterAssignments(items: readonly string[], names: readonly s
   }
   return out;
 }
+
+/** A non-negative integer option (worker counts, seeds). */
+export function countOption(name: string, text: string): number {
+  const v = numberOption(name, text);
+  if (!Number.isInteger(v) || v < 0) throw new InputError(`--${name} must be a non-negative integer, got "${text}"`);
+  return v;
+}
+
+const PROGRESS_MODES = ['auto', 'bar', 'lines', 'off'] as const;
+export type ProgressModeName = (typeof PROGRESS_MODES)[number];
+
+export function progressModeOption(text: string): ProgressModeName {
+  const hit = PROGRESS_MODES.find((m) => m === text);
+  if (!hit) throw new InputError(`--progress must be one of ${PROGRESS_MODES.join(', ')}, got "${text}"`);
+  return hit;
+}

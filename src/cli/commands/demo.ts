@@ -1,44 +1,28 @@
-import { existsSync } from 'node:fs';
-import { dirname, join, resolve } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import type { Command } from 'commander';
-import { formatLinearTheorySummary, linearPowerFromCosmology, readLinearTheoryConfig, summariseLinearTheory } from '../../cosmology/index.js';
+import { runDemoFit } from '../../workflows/demo/run-demo.js';
+import { findDemoFolder } from '../demo-folder.js';
+import { countOption, progressModeOption } from '../cli-options.js';
 import { action } from '../run-command.js';
 
-const DEMO_CONFIG = join('data-demo', 'demo-cosmology.json');
-
-/** data-demo/ next to the working directory, else above the installed module. */
-function findDemoConfig(): string {
-  if (existsSync(DEMO_CONFIG)) return DEMO_CONFIG;
-  let dir = dirname(fileURLToPath(import.meta.url));
-  for (let i = 0; i < 5; i++) {
-    const candidate = join(dir, DEMO_CONFIG);
-    if (existsSync(candidate)) return candidate;
-    dir = resolve(dir, '..');
-  }
-  return DEMO_CONFIG;
-}
-
-/** `treble demo`: the README's first command. Runs the main job on data-demo/. */
+/** `treble demo`: the README's first command — the joint fit of the bundled invented demo data. */
 export function registerDemo(program: Command): void {
   program
     .command('demo')
-    .description('run the main job on the bundled invented demo data (data-demo/)')
-    .option('--config <file>', 'linear-theory config to use instead of the bundled demo')
+    .description('joint P + B fit of the bundled invented demo data (data-demo/), then its report and the recovered parameters next to the truth')
+    .option('--folder <dir>', 'demo folder written by `treble make-demo` (default: the bundled data-demo/)')
+    .option('--workers <n>', 'worker threads (default: the core count)')
+    .option('--progress <mode>', 'progress display: auto, bar, lines or off', 'auto')
     .action(
-      action((opts: { config?: string }) => {
-        const config = readLinearTheoryConfig(opts.config ?? findDemoConfig());
-        const lp = linearPowerFromCosmology(config.cosmology, config.redshift);
-        const out: string[] = [];
-        if (config.scenario) out.push(config.scenario, '');
-        out.push('Linear theory of the demo cosmology', formatLinearTheorySummary(summariseLinearTheory(lp)), '');
-        out.push('k [h/Mpc]   P_cb [(Mpc/h)^3]   P_nw [(Mpc/h)^3]   f(k)');
-        for (const k of [0.001, 0.01, 0.05, 0.1, 0.2, 0.3, 0.5]) {
-          out.push(
-            `${k.toString().padEnd(10)}  ${lp.power(k).toPrecision(6).padEnd(17)}  ${lp.powerNoWiggle(k).toPrecision(6).padEnd(17)}  ${lp.growthRate(k).toPrecision(5)}`,
-          );
-        }
-        process.stdout.write(`${out.join('\n')}\n`);
+      action(async (opts: { folder?: string; workers?: string; progress: string }) => {
+        const started = Date.now();
+        const { summary, report, recovery } = await runDemoFit(opts.folder ?? findDemoFolder(), {
+          progress: progressModeOption(opts.progress),
+          workers: opts.workers === undefined ? undefined : countOption('workers', opts.workers),
+        });
+        const missed = summary.parameters.filter((r) => r.truth !== null && !r.truthWithin95).map((r) => r.name);
+        process.stdout.write(`\n${summary.table}\nRecovered parameters against the truth of the invented scenario:\n${recovery}`);
+        process.stdout.write(missed.length ? `truth outside the 95% interval for: ${missed.join(', ')}\n` : 'every truth lies within its 95% (2σ) interval\n');
+        process.stdout.write(`report: ${report}\n(${((Date.now() - started) / 1000).toFixed(0)} s)\n`);
       }),
     );
 }

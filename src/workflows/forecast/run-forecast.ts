@@ -1,10 +1,10 @@
-import { InputError } from '../../contracts/input-error.js';
+import { InputError, InputErrors } from '../../contracts/input-error.js';
 import { backgroundOf } from '../../cosmology/background.js';
 import { COSMOLOGY_FIELDS, validateCosmology } from '../../cosmology/cosmology-parameters.js';
 import { addFisher, fisherErrors, fixParameters, gaussianPriorFisher, type FisherErrors } from '../../inference/fisher/fisher-algebra.js';
 import type { FisherMatrix } from '../../inference/fisher/fisher-matrix.js';
 import { binFisherSet } from './bin-fisher-set.js';
-import { validateForecastSpec, type ForecastPrior, type ForecastSpec } from './forecast-spec.js';
+import { FORECAST_DEFAULT_COSMOLOGY, validateForecastSpec, type ForecastPrior, type ForecastSpec } from './forecast-spec.js';
 import { resolveSurvey, type SurveyBin } from './survey.js';
 
 /**
@@ -73,9 +73,7 @@ function sigmaOf(s: SetForecast | undefined, name: string): number | undefined {
 }
 
 export function runForecast(raw: unknown): ForecastResult {
-  const spec = validateForecastSpec(raw);
-  const cosmology = validateCosmology(spec.cosmology, { path: 'cosmology' });
-  const bins = resolveSurvey(spec.survey, backgroundOf(cosmology));
+  const { spec, bins } = validatedForecast(raw);
   const isCosmology = (n: string) => n in COSMOLOGY_FIELDS;
   const rename = (i: number) => (n: string) => (isCosmology(n) || bins.length === 1 ? n : `${n}_z${i + 1}`);
   const perSet: Record<StatisticSet, FisherMatrix[]> = { power: [], bispectrum: [], joint: [] };
@@ -103,6 +101,26 @@ export function runForecast(raw: unknown): ForecastResult {
   }
   const warnings = [...new Set(perSet.joint.flatMap((f) => f.warnings))];
   return { spec, bins, sets, fiducial, improvement, warnings, assumptions: forecastAssumptions(spec, bins) };
+}
+
+/** The spec and the resolved survey, with the problems of both listed at once. */
+function validatedForecast(raw: unknown): { spec: ForecastSpec; bins: SurveyBin[] } {
+  const problems: string[] = [];
+  const collect = <T>(f: () => T): T | undefined => {
+    try {
+      return f();
+    } catch (e) {
+      if (!(e instanceof InputErrors)) throw e;
+      problems.push(...e.problems);
+      return undefined;
+    }
+  };
+  const spec = collect(() => validateForecastSpec(raw));
+  const survey = spec?.survey ?? (raw as Record<string, unknown> | null)?.survey;
+  const cosmology = collect(() => validateCosmology(spec?.cosmology ?? FORECAST_DEFAULT_COSMOLOGY, { path: 'cosmology' }));
+  const bins = cosmology && survey !== undefined ? collect(() => resolveSurvey(survey, backgroundOf(cosmology))) : undefined;
+  if (problems.length || !spec || !bins) throw new InputErrors(problems);
+  return { spec, bins };
 }
 
 function forecastAssumptions(spec: ForecastSpec, bins: readonly SurveyBin[]): string[] {
