@@ -15,6 +15,9 @@ export class BlockCholesky {
   readonly blocks: readonly { readonly indices: Int32Array; readonly factor: CholeskyFactor }[];
   private readonly scratchIn: Float64Array;
   private readonly scratchOut: Float64Array;
+  private readonly singleIndex: Int32Array;
+  private readonly singleInverse: Float64Array;
+  private readonly multiples: readonly { readonly indices: Int32Array; readonly factor: CholeskyFactor; readonly x: Float64Array; readonly y: Float64Array }[];
 
   constructor(matrix: Float64Array, n: number, label = 'covariance') {
     this.size = n;
@@ -33,20 +36,28 @@ export class BlockCholesky {
     this.logDet = logDet;
     this.scratchIn = new Float64Array(largest);
     this.scratchOut = new Float64Array(largest);
+    // Entries uncorrelated with any other are whitened in one flat loop, first.
+    const singles = this.blocks.filter((b) => b.indices.length === 1);
+    this.singleIndex = Int32Array.from(singles, (b) => b.indices[0]);
+    this.singleInverse = Float64Array.from(singles, (b) => 1 / b.factor.lower[0]);
+    this.multiples = this.blocks
+      .filter((b) => b.indices.length > 1)
+      .map((b) => ({ ...b, x: this.scratchIn.subarray(0, b.indices.length), y: this.scratchOut.subarray(0, b.indices.length) }));
   }
 
-  /** out = L^{-1} v in the block order (norms and dot products are unchanged by the permutation). */
+  /**
+   * out = L^{-1} v with the entries permuted (single entries first, then the
+   * blocks); norms and dot products are unchanged by the permutation.
+   */
   whiten(v: Float64Array, out: Float64Array = new Float64Array(this.size)): Float64Array {
-    let offset = 0;
-    for (const { indices, factor } of this.blocks) {
+    const single = this.singleIndex;
+    const inverse = this.singleInverse;
+    let offset = single.length;
+    for (let a = 0; a < offset; a++) out[a] = v[single[a]] * inverse[a];
+    for (const { indices, factor, x, y } of this.multiples) {
       const m = indices.length;
-      if (m === 1) {
-        out[offset++] = v[indices[0]] / factor.lower[0];
-        continue;
-      }
-      const x = this.scratchIn.subarray(0, m);
       for (let a = 0; a < m; a++) x[a] = v[indices[a]];
-      const y = solveLower(factor, x, this.scratchOut.subarray(0, m));
+      solveLower(factor, x, y);
       out.set(y, offset);
       offset += m;
     }
