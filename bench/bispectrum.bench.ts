@@ -29,6 +29,15 @@ import { Random } from '../src/numerics/random.js';
 const cosmology = (h: number) =>
   validateCosmology({ h, omegaB: 0.02237, omegaCdm: 0.12, ns: 0.9649, lnAs: 3.044, mNu: 0.06, massiveNuCount: 1 }, { path: 'cosmology', file: 'bench' });
 
+/** Mean CPU time (user + system) per call in ms: on a shared, oversubscribed machine closer to one idle core than wall time. */
+function cpuMean(fn: () => unknown, repeats: number): number {
+  fn();
+  const c0 = process.cpuUsage();
+  for (let i = 0; i < repeats; i++) fn();
+  const c = process.cpuUsage(c0);
+  return (c.user + c.system) / 1000 / repeats;
+}
+
 function maxRelative(a: Float64Array, b: Float64Array): number {
   let e = 0;
   for (let i = 0; i < a.length; i++) e = Math.max(e, Math.abs(a[i] / b[i] - 1));
@@ -56,6 +65,7 @@ const bench: Benchmark = {
       const geometryMs = performance.now() - g0;
       let next = 0;
       const full = timeMedian(() => evaluator.evaluate(settingsOf(spectra[next++ % spectra.length]), params), repeats, 2);
+      const fullCpuMs = cpuMean(() => evaluator.evaluate(settingsOf(spectra[next++ % spectra.length]), params), repeats);
       // Accuracy of the converged setting against a much finer bin-volume quadrature and orientation rule.
       const value = evaluator.evaluate(settingsOf(spectra[0]), params);
       const fine = new TreeMultipoleEvaluator(continuousBinNodes(bins, DEFAULT_VOLUME_ORDER + 3), [0, 2], orientationRule(8, 10)).evaluate(
@@ -78,14 +88,17 @@ const bench: Benchmark = {
       }));
       let d = 0;
       const reeval = timeMedian(() => combineTreeTemplates(templates, 2, draws[d++ % draws.length], out), 200, 20);
+      const reevalCpuMs = cpuMean(() => combineTreeTemplates(templates, 2, draws[d++ % draws.length], out), 2000);
       results[`bins${bins.size}`] = {
         binning: { kMin, kMax, dk, bins: bins.size },
         geometry: { volumeNodes: nodes.weight.length, orientationPoints: rule.weight.length, precomputeMs: geometryMs },
         fullEvaluationMs: full,
+        fullEvaluationCpuMs: fullCpuMs,
         fullEvaluationTargetMs: bins.size === 477 ? 10 : 100,
         maxRelativeDifferenceToFinerQuadrature: maxRelative(value, fine),
         templateBuildFromNewSpectrumMs: templateBuildMs,
         templateReEvaluationMs: reeval,
+        templateReEvaluationCpuMs: reevalCpuMs,
         templateReEvaluationTargetMs: 0.5,
       };
     }
