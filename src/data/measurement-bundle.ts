@@ -31,7 +31,7 @@ function parseJson(path: string, label: string): unknown {
 
 /** Load `<folder>/measurement.json` and the tables it names. */
 export function loadMeasurementBundle(folder: string): MeasurementBundle {
-  const metadata = validateBundleMetadata(parseJson(join(folder, BUNDLE_METADATA_FILE), BUNDLE_METADATA_FILE), BUNDLE_METADATA_FILE);
+  const metadata = validateBundleMetadata(parseJson(join(folder, BUNDLE_METADATA_FILE), join(folder, BUNDLE_METADATA_FILE)), BUNDLE_METADATA_FILE);
   const read = (files: BundleMetadata['power'], statistic: 'P' | 'B') =>
     files ? readStatisticTable(readNumericTable(join(folder, files.table), files.table), statistic, files.dk) : undefined;
   const power = read(metadata.power, 'P');

@@ -49,6 +49,10 @@ describe('measurement bundle', () => {
     for (const key of ['format', 'redshift', 'numberDensity', 'lineOfSight', 'boxSize', 'extra']) expect(message).toContain(`measurement.json: ${key}`);
   });
 
+  it('names the folder when there is no metadata file', () => {
+    expect(() => loadMeasurementBundle('/nonexistent/bundle')).toThrow(/\/nonexistent\/bundle\/measurement\.json: cannot read the file/);
+  });
+
   it('refuses a box measurement with a survey line of sight', () => {
     const bad = baseBundle();
     bad.metadata = { ...bad.metadata, lineOfSight: 'midpoint' };
