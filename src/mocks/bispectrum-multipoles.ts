@@ -49,11 +49,15 @@ function shellFields(p: Prepared, source: Float64Array | null, weighting: ShellW
   return p.modes.map((m, s) => (wanted[s] ? shellFilteredField(p.fourier, m, source, weighting, shifted, p.work) : EMPTY));
 }
 
-/** Per-shell fields of one triangle sum: kinds of first-side fields, and the second and third sides. */
+/**
+ * Per-shell fields of one triangle sum: kinds of first-side fields, and the
+ * second and third sides; `include` limits it to some bins (the rest get 0).
+ */
 interface SumJob {
   readonly first: Float64Array[][];
   readonly second: Float64Array[];
   readonly third: Float64Array[];
+  readonly include?: Uint8Array;
 }
 
 /**
@@ -69,7 +73,9 @@ function exactTriangleSums(p: Prepared, bins: TriangleBins, jobs: (shifted: bool
     const out: Float64Array[] = [];
     for (const job of jobs(pass)) {
       const sums = job.first.map(() => new Float64Array(bins.size));
-      accumulateTriangleSums(bins, job.first, job.second, job.third, sums, pass ? p.shifted : undefined);
+      const own = job.include;
+      const include = pass ? (own ? p.shifted.map((v, b) => v & own[b]) : p.shifted) : own;
+      accumulateTriangleSums(bins, job.first, job.second, job.third, sums, include);
       out.push(...sums);
     }
     if (pass) shifted = out;
@@ -94,15 +100,26 @@ export interface TriangleGeometry {
  */
 export function triangleGeometryByFft(mesh: Mesh, bins: TriangleBins): TriangleGeometry {
   const p = prepare(mesh, bins);
+  // Equal shells give equal mean sides: k2 = k1 when i = j, k3 = k2 when j = l (not summed twice).
+  const secondDiffers = new Uint8Array(bins.size);
+  const thirdDiffers = new Uint8Array(bins.size);
+  for (let b = 0; b < bins.size; b++) {
+    secondDiffers[b] = bins.indices[3 * b] !== bins.indices[3 * b + 1] ? 1 : 0;
+    thirdDiffers[b] = bins.indices[3 * b + 1] !== bins.indices[3 * b + 2] ? 1 : 0;
+  }
   const [sums, k1, k2, k3] = exactTriangleSums(p, bins, (shifted) => {
     const unit = shellFields(p, null, 'unit', shifted);
     const norm = shellFields(p, null, 'norm', shifted);
     return [
       { first: [unit, norm], second: unit, third: unit },
-      { first: [unit], second: norm, third: unit },
-      { first: [unit], second: unit, third: norm },
+      { first: [unit], second: norm, third: unit, include: secondDiffers },
+      { first: [unit], second: unit, third: norm, include: thirdDiffers },
     ];
   });
+  for (let b = 0; b < bins.size; b++) {
+    if (!secondDiffers[b]) k2[b] = k1[b];
+    if (!thirdDiffers[b]) k3[b] = k2[b];
+  }
   const scale = mesh.n ** 6;
   const counts = sums.map((v) => Math.round(v * scale));
   const effective = new Float64Array(3 * bins.size);
