@@ -76,7 +76,7 @@ function modelSource(o: JointLikelihoodOptions, bundle: MeasurementBundle, build
     (values) => {
       const params = validateCosmology(values, { path: 'parameters' });
       const spectrum = linearPowerFromCosmology(params, z, linearPower);
-      return { spectrum, ...apDilations(spectrum.background, fiducial, z) };
+      return { spectrum, ...apDilations(spectrum.background, fiducial, z), sigma8Today: spectrum.sigma8MatterToday, omegaMatter: spectrum.background.omegaMatter0 };
     },
     build,
   );

@@ -32,7 +32,7 @@ export interface ModelSource {
 
 export type ModelsForSpectrum = (spectrum: LinearSpectrum) => readonly StatisticModel[];
 
-const PROVIDED = ['sigma8Cold', 'fsigma8', 'growthRate', 'alphaPar', 'alphaPerp'] as const;
+const PROVIDED = ['sigma8Cold', 'fsigma8', 'growthRate', 'alphaPar', 'alphaPerp', 'sigma8Today', 'omegaMatter'] as const;
 
 /** What full mode builds from the cosmology parameters: the spectrum and the AP dilations. */
 export interface CosmologyBuild {
@@ -40,6 +40,9 @@ export interface CosmologyBuild {
   /** Dilations relative to the measurement's fiducial cosmology; default 1. */
   readonly alphaPar?: number;
   readonly alphaPerp?: number;
+  /** sigma8 of the total matter at z = 0 and Omega_m today, when known. */
+  readonly sigma8Today?: number;
+  readonly omegaMatter?: number;
 }
 
 /**
@@ -70,7 +73,15 @@ export function fullCosmologySource(names: readonly string[], cosmologyFor: (cos
       return {
         models: cache.models,
         modelValues: { ...values, f, alphaPar, alphaPerp },
-        provided: { sigma8Cold: spectrum.sigma8, fsigma8: f * spectrum.sigma8, growthRate: spectrum.growthRateLargeScale, alphaPar, alphaPerp },
+        provided: {
+          sigma8Cold: spectrum.sigma8,
+          fsigma8: f * spectrum.sigma8,
+          growthRate: spectrum.growthRateLargeScale,
+          alphaPar,
+          alphaPerp,
+          sigma8Today: cache.cosmology.sigma8Today ?? Number.NaN,
+          omegaMatter: cache.cosmology.omegaMatter ?? Number.NaN,
+        },
       };
     },
     describe: () => ({ cosmologyMode: 'full', cosmologyParameters: names.join(', ') }),

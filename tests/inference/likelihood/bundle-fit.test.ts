@@ -117,10 +117,15 @@ describe('likelihood with the power and bispectrum models on a bundle', () => {
         mNu: { value: 0.06 },
         massiveNuCount: { value: 1 },
         b1: { prior: { kind: 'uniform', min: 1, max: 3 }, start: 1.9 },
+        omegaMatterCheck: { derived: 'omegaMatter' },
         ...marginalised,
       },
     });
     const at = full.pointAt(Float64Array.from([0.6736, 1.9]), { bestFit: true });
+    // Provided quantities from the cosmology code (Planck 2018 sigma8 = 0.811, from memory, within a few percent).
+    expect(at.values.omegaMatter).toBeCloseTo((0.02237 + 0.12 + 0.06 / 93.14) / 0.6736 ** 2, 3);
+    expect(Math.abs(at.values.sigma8Today / 0.811 - 1)).toBeLessThan(0.05);
+    expect(at.values.omegaMatterCheck).toBe(at.values.omegaMatter);
     expect(at.values.alphaPar).toBe(1);
     expect(at.values.alphaPerp).toBe(1);
     expect(at.chi2).toBeLessThan(1e-6);
