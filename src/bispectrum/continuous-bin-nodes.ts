@@ -20,7 +20,7 @@ import type { TriangleNodeSet } from './triangle-node-set.js';
  * smaller): pieces narrow compared with the smallest side need fewer nodes for
  * the same accuracy, the widest (lowest shells) more.
  */
-export function piecePoints(order: number, width: number, scale: number): number {
+function piecePoints(order: number, width: number, scale: number): number {
   const r = width / scale;
   if (r >= 0.75) return order + 1;
   return r >= 0.25 ? order : Math.max(Math.min(3, order), order - 1);

@@ -209,12 +209,14 @@ export class TreeMultipoleEvaluator {
         // Orientation points are mu-major: side 1's damping factors change only with the mu node.
         let P1 = 0;
         let d1 = 0;
+        let nextMu = 0;
         for (let o = 0; o < nOrient; o++) {
           const m1 = M1[o];
           const q1 = m1 * m1;
-          if (o % nPhi === 0) {
+          if (o === nextMu) {
             P1 = ir ? n1k + w1k * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : n1k + w1k;
             d1 = -halfSv2 * k1 * k1 * q1;
+            nextMu += nPhi;
           }
           const m2 = m1 * c12 - sinMu1[o] * s12 * cosPhi[o];
           const m3 = -(k1 * m1 + k2 * m2) / k3;
