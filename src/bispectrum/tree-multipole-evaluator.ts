@@ -206,6 +206,9 @@ export class TreeMultipoleEvaluator {
         const w2k = sides[4];
         const w3k = sides[5];
         const wn = weight[i];
+        const i1 = 1 / k1;
+        const i2 = 1 / k2;
+        const i3 = 1 / k3;
         // Orientation points are mu-major: side 1's damping factors change only with the mu node.
         let P1 = 0;
         let d1 = 0;
@@ -219,7 +222,7 @@ export class TreeMultipoleEvaluator {
             nextMu += nPhi;
           }
           const m2 = m1 * c12 - sinMu1[o] * s12 * cosPhi[o];
-          const m3 = -(k1 * m1 + k2 * m2) / k3;
+          const m3 = -(k1 * m1 + k2 * m2) * i3;
           const q2 = m2 * m2;
           const q3 = m3 * m3;
           const P2 = ir ? n2k + w2k * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : n2k + w2k;
@@ -228,9 +231,9 @@ export class TreeMultipoleEvaluator {
           const z2 = b1 + f * q2;
           const z3 = b1 + f * q3;
           // Z2 of each pair (Scoccimarro, Couchman & Frieman 1999, eq. 13); the sum vector of pair (a, b) is -k_c.
-          const zz12 = pairZ2(b1, b2, bG2, f, pk[o9], pk[o9 + 1], pk[o9 + 2], k1, k2, m1, m2, q1, q2, q3);
-          const zz23 = pairZ2(b1, b2, bG2, f, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5], k2, k3, m2, m3, q2, q3, q1);
-          const zz31 = pairZ2(b1, b2, bG2, f, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8], k3, k1, m3, m1, q3, q1, q2);
+          const zz12 = pairZ2(b1, b2, bG2, f, pk[o9], pk[o9 + 1], pk[o9 + 2], k1, k2, i1, i2, m1, m2, q1, q2, q3);
+          const zz23 = pairZ2(b1, b2, bG2, f, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5], k2, k3, i2, i3, m2, m3, q2, q3, q1);
+          const zz31 = pairZ2(b1, b2, bG2, f, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8], k3, k1, i3, i1, m3, m1, q3, q1, q2);
           let b = 2 * (z1 * z2 * zz12 * P1 * P2 + z2 * z3 * zz23 * P2 * P3 + z3 * z1 * zz31 * P3 * P1);
           if (sigmaV > 0) b *= Math.exp(d1 - halfSv2 * (k2 * k2 * q2 + k3 * k3 * q3));
           b += stochP * (z1 * P1 + z2 * P2 + z3 * P3) + stochConst;
@@ -243,7 +246,7 @@ export class TreeMultipoleEvaluator {
   }
 }
 
-/** Z2(k_a, k_b) from precomputed F2, G2, sigma^2 and the cosines (mu_ab^2 of the sum = mu_c^2). */
+/** Z2(k_a, k_b) from precomputed F2, G2, sigma^2, 1/k_a, 1/k_b and the cosines (mu^2 of the sum vector = mu_c^2). */
 function pairZ2(
   b1: number,
   b2: number,
@@ -254,6 +257,8 @@ function pairZ2(
   S: number,
   ka: number,
   kb: number,
+  invKa: number,
+  invKb: number,
   ma: number,
   mb: number,
   qa: number,
@@ -261,7 +266,7 @@ function pairZ2(
   qc: number,
 ): number {
   const muK = ma * ka + mb * kb;
-  return b1 * F + f * qc * G + 0.5 * f * muK * ((ma / ka) * (b1 + f * qb) + (mb / kb) * (b1 + f * qa)) + 0.5 * b2 + bG2 * S;
+  return b1 * F + f * qc * G + 0.5 * f * muK * (ma * invKa * (b1 + f * qb) + mb * invKb * (b1 + f * qa)) + 0.5 * b2 + bG2 * S;
 }
 
 /** P_nw(k) into sides[j] and P_w(k), damped by exp(-k^2 Sigma^2) when IR-resummed, into sides[3 + j]. */
