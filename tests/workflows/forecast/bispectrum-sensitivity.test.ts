@@ -6,7 +6,7 @@ const bin = { zMin: 0.4, zMax: 0.6, zEff: 0.5, volume: 2e9, nbar: 3e-4, bias: { 
 const bispectrum = { kMin: 0.02, kMax: 0.12, dk: 0.02, multipoles: [0] };
 
 describe('bispectrum sensitivity maps', () => {
-  const s = bispectrumSensitivity({ bin, cosmology: PLANCK, names: ['mNu', 'b1', 'b2', 'bG2'], steps: { mNu: 0.02 }, bispectrum, models: { bispectrum: { averaging: 'centres' } } });
+  const s = bispectrumSensitivity({ bin, cosmology: PLANCK, names: ['mNu', 'b1', 'b2', 'bG2'], steps: { mNu: 0.01 }, bispectrum, models: { bispectrum: { averaging: 'centres' } } });
   const [, , b2, bG2] = s.maps;
 
   it('dB0/dbG2 over dB0/db2 is 2 sigma^2 = -3/2 for equilateral and 0 for collinear triangles (tidal kernel sigma^2 = mu_12^2 - 1, docs/conventions.md)', () => {
