@@ -32,7 +32,11 @@ export interface ModelSource {
 
 export type ModelsForSpectrum = (spectrum: LinearSpectrum) => readonly StatisticModel[];
 
-const PROVIDED = ['sigma8Cold', 'fsigma8', 'growthRate', 'alphaPar', 'alphaPerp', 'sigma8Today', 'omegaMatter'] as const;
+/** Quantities each cosmology mode provides to derived expressions (names a parameter may not take). */
+export const PROVIDED_QUANTITIES: Readonly<Record<'full' | 'fixed-template', readonly string[]>> = {
+  full: ['sigma8Cold', 'fsigma8', 'growthRate', 'alphaPar', 'alphaPerp', 'sigma8Today', 'omegaMatter'],
+  'fixed-template': ['sigma8Cold', 'f'],
+};
 
 /** What full mode builds from the cosmology parameters: the spectrum and the AP dilations. */
 export interface CosmologyBuild {
@@ -55,7 +59,7 @@ export function fullCosmologySource(names: readonly string[], cosmologyFor: (cos
   let cache: { cosmology: CosmologyBuild; models: readonly StatisticModel[] } | undefined;
   return {
     mode: 'full',
-    providedNames: PROVIDED,
+    providedNames: PROVIDED_QUANTITIES.full,
     requiredNames: names,
     prepare(values) {
       const cosmology: Record<string, number> = {};
@@ -112,7 +116,7 @@ export function fixedTemplateSource(template: LinearSpectrum, build: ModelsForSp
   let cache: { q: number; models: readonly StatisticModel[] } | undefined;
   return {
     mode: 'fixed-template',
-    providedNames: ['sigma8Cold', 'f'],
+    providedNames: PROVIDED_QUANTITIES['fixed-template'],
     requiredNames: TEMPLATE_PARAMETERS,
     prepare(values) {
       const q = values.templateAmplitude;
