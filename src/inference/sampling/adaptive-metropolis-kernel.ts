@@ -25,7 +25,6 @@ export interface AdaptiveMetropolisState {
  * are drawn before its evaluations, chain after chain.
  */
 export class AdaptiveMetropolisKernel implements SamplerKernel {
-  readonly memberLabel = 'chain';
   readonly members: number;
   readonly positions: Float64Array;
   readonly logPosterior: Float64Array;

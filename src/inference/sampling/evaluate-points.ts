@@ -1,7 +1,6 @@
 import type { LogPosterior } from './log-posterior-reference.js';
 
-/** Outcome codes of one evaluation. */
-export const evaluationOk = 0;
+/** Outcome codes of one evaluation (0: a number, the log-posterior). */
 export const evaluationNaN = 1;
 export const evaluationThrew = 2;
 

@@ -16,8 +16,6 @@ export interface SavedRandom {
  * random state), so a checkpoint taken afterwards resumes bit-identically.
  */
 export interface SamplerKernel {
-  /** Column name of the member index in chain files: "walker" or "chain". */
-  readonly memberLabel: string;
   readonly members: number;
   readonly dim: number;
   /** Current points (members x dim, row-wise) and their log-posteriors. */

@@ -39,6 +39,7 @@ export interface SamplingMethod {
   /** "stretch-move-ensemble" or "adaptive-metropolis". */
   readonly name: string;
   readonly members: number;
+  /** Column name of the member index in chain files: "walker" or "chain". */
   readonly memberLabel: string;
   /** Settings that determine the chain; a resumed run must repeat them. */
   readonly fingerprint: Record<string, unknown>;

@@ -20,7 +20,6 @@ export interface StretchMoveState {
  * a half-step is drawn before its evaluations, in walker order.
  */
 export class StretchMoveKernel implements SamplerKernel {
-  readonly memberLabel = 'walker';
   readonly members: number;
   readonly positions: Float64Array;
   readonly logPosterior: Float64Array;
