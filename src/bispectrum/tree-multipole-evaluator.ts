@@ -118,15 +118,18 @@ export class TreeMultipoleEvaluator {
     const nOrient = M1.length;
     const wl = this.weights;
     const fd = s.fForBaoDamping;
+    const ir = s.irResummation;
     const aIR = fd * (2 + fd) * s.spectrum.sigma2BAO - fd * fd * s.spectrum.deltaSigma2BAO;
     const cIR = fd * fd * s.spectrum.deltaSigma2BAO;
     const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
     const n1 = s.inverseDensity;
     const sides = new Float64Array(6);
     const v = new Float64Array(T);
+    const acc = new Float64Array(nm * T);
     const pk = this.pairKernels;
     for (let bin = 0; bin < binCount; bin++) {
       const base = bin * nm * T;
+      acc.fill(0);
       for (let i = start[bin]; i < start[bin + 1]; i++) {
         const k1 = K1[i];
         const k2 = K2[i];
@@ -136,32 +139,41 @@ export class TreeMultipoleEvaluator {
         const o9 = 9 * i;
         this.sidePowers(s, i, sides);
         const wn = weight[i];
+        const n1k = sides[0];
+        const n2k = sides[1];
+        const n3k = sides[2];
+        const w1k = sides[3];
+        const w2k = sides[4];
+        const w3k = sides[5];
+        const i1 = 1 / k1;
+        const i2 = 1 / k2;
+        const i3 = 1 / k3;
         for (let o = 0; o < nOrient; o++) {
           const m1 = M1[o];
           const m2 = m1 * c12 - sinMu1[o] * s12 * cosPhi[o];
-          const m3 = -(k1 * m1 + k2 * m2) / k3;
+          const m3 = -(k1 * m1 + k2 * m2) * i3;
           const q1 = m1 * m1;
           const q2 = m2 * m2;
           const q3 = m3 * m3;
-          const P1 = s.irResummation ? sides[0] + sides[3] * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : sides[0] + sides[3];
-          const P2 = s.irResummation ? sides[1] + sides[4] * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : sides[1] + sides[4];
-          const P3 = s.irResummation ? sides[2] + sides[5] * Math.exp(-k3 * k3 * q3 * (aIR + cIR * q3)) : sides[2] + sides[5];
-          v.fill(0, 0, 14);
-          addPairTemplates(v, 0, 2 * P1 * P2, k1, k2, m1, m2, m3, pk[o9], pk[o9 + 1], pk[o9 + 2]);
-          addPairTemplates(v, 0, 2 * P2 * P3, k2, k3, m2, m3, m1, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5]);
-          addPairTemplates(v, 0, 2 * P3 * P1, k3, k1, m3, m1, m2, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8]);
+          const P1 = ir ? n1k + w1k * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : n1k + w1k;
+          const P2 = ir ? n2k + w2k * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : n2k + w2k;
+          const P3 = ir ? n3k + w3k * Math.exp(-k3 * k3 * q3 * (aIR + cIR * q3)) : n3k + w3k;
           const damp = halfSv2 > 0 ? Math.exp(-halfSv2 * (k1 * k1 * q1 + k2 * k2 * q2 + k3 * k3 * q3)) : 1;
-          for (let t = 0; t < 14; t++) v[t] *= damp;
+          for (let t = 0; t < 14; t++) v[t] = 0;
+          addPairTemplates(v, 0, 2 * damp * P1 * P2, -m3 * k3, i1, i2, m1, m2, m3, pk[o9], pk[o9 + 1], pk[o9 + 2]);
+          addPairTemplates(v, 0, 2 * damp * P2 * P3, -m1 * k1, i2, i3, m2, m3, m1, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5]);
+          addPairTemplates(v, 0, 2 * damp * P3 * P1, -m2 * k2, i3, i1, m3, m1, m2, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8]);
           v[14] = n1 * (P1 + P2 + P3);
           v[15] = n1 * (q1 * P1 + q2 * P2 + q3 * P3);
           v[16] = n1 * n1;
           for (let m = 0; m < nm; m++) {
             const w = wn * wl[o * nm + m];
-            const row = base + m * T;
-            for (let t = 0; t < T; t++) out[row + t] += w * v[t];
+            const row = m * T;
+            for (let t = 0; t < T; t++) acc[row + t] += w * v[t];
           }
         }
       }
+      for (let r = 0; r < nm * T; r++) out[base + r] = acc[r];
     }
     return out;
   }

@@ -48,21 +48,25 @@ function addPair(s: Float64Array, a: number, b: number, c: number, out: Float64A
   const F = kernelF2(qa, qb, cosAB);
   const G = kernelG2(qa, qb, cosAB);
   const S = kernelGalileonTidal(cosAB);
-  addPairTemplates(out, o, 2 * s[6 + a] * s[6 + b], qa, qb, s[3 + a], s[3 + b], s[3 + c], F, G, S);
+  const na = s[3 + a];
+  const nb = s[3 + b];
+  addPairTemplates(out, o, 2 * s[6 + a] * s[6 + b], na * qa + nb * qb, 1 / qa, 1 / qb, na, nb, s[3 + c], F, G, S);
 }
 
 /**
  * The monomial split of w Z1(q_a) Z1(q_b) Z2(q_a, q_b) added to out[o + 0..13],
- * given the pair's F2, G2 and sigma^2 and the cosines nu_a, nu_b, nu_c with the
- * line of sight (the sum vector q_a + q_b = -q_c has cosine squared nu_c^2 and
- * mu k = nu_a q_a + nu_b q_b). Z2 = b1 (F2 + f A1) + f nu_c^2 G2 + f^2 A2 + b2/2 + bG2 sigma^2.
+ * given the pair's F2, G2 and sigma^2, the inverse lengths 1/q_a, 1/q_b and the
+ * cosines nu_a, nu_b, nu_c with the line of sight; the sum vector q_a + q_b = -q_c
+ * has cosine squared nu_c^2 and mu k = nu_a q_a + nu_b q_b (`muK`).
+ * Z2 = b1 (F2 + f A1) + f nu_c^2 G2 + f^2 A2 + b2/2 + bG2 sigma^2.
  */
 export function addPairTemplates(
   out: Float64Array,
   o: number,
   w: number,
-  qa: number,
-  qb: number,
+  muK: number,
+  invQa: number,
+  invQb: number,
   na: number,
   nb: number,
   nc: number,
@@ -70,12 +74,11 @@ export function addPairTemplates(
   G: number,
   S: number,
 ): void {
-  const muK = na * qa + nb * qb;
   const na2 = na * na;
   const nb2 = nb * nb;
-  const zB1f = 0.5 * muK * (na / qa + nb / qb);
+  const zB1f = 0.5 * muK * (na * invQa + nb * invQb);
   const zF = nc * nc * G;
-  const zF2 = 0.5 * muK * ((na * nb2) / qa + (nb * na2) / qb);
+  const zF2 = 0.5 * muK * na * nb * (nb * invQa + na * invQb);
   const u0 = w;
   const u1 = w * (na2 + nb2);
   const u2 = w * na2 * nb2;
