@@ -12,10 +12,10 @@ export function registerScaleCutScan(program: Command): void {
     .command('scan')
     .description('scale-cut scan: best fit per k_max, shifts in sigma, chi2/dof, p-value and chi2 per shape class, first flagged k_max')
     .argument('<config>', 'scan config (JSON: bundle, parameters, covariance, statistic, kMax, ...)')
-    .option('--out <dir>', 'write scan.md, scan.json and scan-shifts.svg here')
+    .option('--out <dir>', 'write scan.md, scan.json and scan-shifts.svg here (and, in sampling mode, the chains under chains/)')
     .action(
-      action((configPath: string, opts: { out?: string }) => {
-        const scan = runScanFromConfig(readConfigJson(configPath), dirname(configPath));
+      action(async (configPath: string, opts: { out?: string }) => {
+        const scan = await runScanFromConfig(readConfigJson(configPath), dirname(configPath), opts.out && join(opts.out, 'chains'));
         const table = renderScanTable(scan);
         process.stdout.write(table);
         if (!opts.out) return;

@@ -1,3 +1,5 @@
+import { mkdirSync, mkdtempSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { isAbsolute, join } from 'node:path';
 import { InputErrors } from '../../contracts/input-error.js';
 import { validateCosmology } from '../../cosmology/cosmology-parameters.js';
@@ -7,8 +9,12 @@ import { loadMeasurementBundle } from '../../data/measurement-bundle.js';
 import type { ScaleCuts } from '../../data/scale-cuts.js';
 import { bundleModels, type BundleModelOptions } from '../../inference/likelihood/bundle-models.js';
 import { fixedModelSource } from '../../inference/likelihood/model-source.js';
-import type { ParameterSpecs } from '../../inference/parameters/parameter-space.js';
-import { runScaleCutScan, type ScaleCutScan } from './scale-cut-scan.js';
+import { ParameterSpace, type ParameterSpecs } from '../../inference/parameters/parameter-space.js';
+import { meanAndSd } from '../../inference/sampling/draw-summary.js';
+import { trebleLibraryModule } from '../../inference/sampling/module-locations.js';
+import { sampleEnsemble } from '../../inference/sampling/sample-ensemble.js';
+import { sampledParametersFromPriors } from '../../inference/sampling/sampled-parameters-from-priors.js';
+import { runScaleCutScan, scanContext, scanStepLikelihood, type ScaleCutScan, type ScaleCutScanInputs, type ScanPosterior } from './scale-cut-scan.js';
 import type { TheoryErrorEnvelope } from './theory-error-covariance.js';
 
 /**
@@ -23,10 +29,20 @@ import type { TheoryErrorEnvelope } from './theory-error-covariance.js';
  *   theoryError:   { amplitude, kRef, slope, correlationLength } (optional);
  *   truth:         true parameter values, when the data come with them (optional);
  *   shiftThreshold, pValueLimit: flag limits (defaults in scale-cut-scan.ts);
- *   models, linearPower: model and linear-spectrum settings (optional).
+ *   models, linearPower: model and linear-spectrum settings (optional);
+ *   mode:          "best-fit" (default, fast) or "sampling": a short ensemble run per cut,
+ *                  started at the cut's best fit, shifts in units of the posterior sd;
+ *   sampling:      { seed, walkers?, maxSteps? (default 2000), workers? } for mode "sampling".
  * The linear spectrum is fixed at the bundle's fiducial cosmology (no
  * cosmology parameters are fitted in the scan).
  */
+export interface ScanSamplingSettings {
+  readonly seed: number;
+  readonly walkers?: number;
+  readonly maxSteps?: number;
+  readonly workers?: number;
+}
+
 export interface ScanConfig {
   readonly bundle: string;
   readonly parameters: ParameterSpecs;
@@ -41,9 +57,12 @@ export interface ScanConfig {
   readonly pValueLimit?: number;
   readonly models?: BundleModelOptions;
   readonly linearPower?: LinearPowerOptions;
+  readonly mode: 'best-fit' | 'sampling';
+  readonly sampling?: ScanSamplingSettings;
 }
 
-const KEYS = ['bundle', 'parameters', 'covariance', 'statistic', 'kMax', 'cuts', 'excludeShapes', 'theoryError', 'truth', 'shiftThreshold', 'pValueLimit', 'models', 'linearPower'];
+const KEYS = ['bundle', 'parameters', 'covariance', 'statistic', 'kMax', 'cuts', 'excludeShapes', 'theoryError', 'truth', 'shiftThreshold', 'pValueLimit', 'models', 'linearPower', 'mode', 'sampling'];
+const SAMPLING_KEYS = ['seed', 'walkers', 'maxSteps', 'workers'];
 const ENVELOPE_KEYS = ['amplitude', 'kRef', 'slope', 'correlationLength'];
 type Json = Record<string, unknown>;
 const isObject = (v: unknown): v is Json => typeof v === 'object' && v !== null && !Array.isArray(v);
@@ -77,20 +96,26 @@ export function validateScanConfig(raw: unknown): ScanConfig {
   if (raw.truth !== undefined && !(isObject(raw.truth) && Object.values(raw.truth).every(isNum))) problems.push('truth must be an object of named numbers');
   for (const k of ['shiftThreshold', 'pValueLimit']) if (raw[k] !== undefined && !isNum(raw[k])) problems.push(`${k} must be a number`);
   for (const k of ['cuts', 'models', 'linearPower']) if (raw[k] !== undefined && !isObject(raw[k])) problems.push(`${k} must be an object`);
+  if (raw.mode !== undefined && raw.mode !== 'best-fit' && raw.mode !== 'sampling') problems.push(`mode must be "best-fit" or "sampling", got ${JSON.stringify(raw.mode)}`);
+  if (raw.mode === 'sampling' && !isObject(raw.sampling)) problems.push('sampling must be an object { seed, walkers?, maxSteps?, workers? } with mode "sampling"');
+  if (raw.sampling !== undefined && raw.mode !== 'sampling') problems.push('sampling is only used with mode "sampling"');
+  if (isObject(raw.sampling)) {
+    for (const k of Object.keys(raw.sampling)) if (!SAMPLING_KEYS.includes(k)) problems.push(`sampling.${k} is not a key (${SAMPLING_KEYS.join(', ')})`);
+    if (!Number.isInteger(raw.sampling.seed) || (raw.sampling.seed as number) < 0) problems.push('sampling.seed must be a non-negative integer');
+    for (const k of ['walkers', 'maxSteps', 'workers']) if (raw.sampling[k] !== undefined && !(Number.isInteger(raw.sampling[k]) && (raw.sampling[k] as number) >= 0)) problems.push(`sampling.${k} must be a non-negative integer`);
+  }
   if (problems.length) throw new InputErrors(problems);
-  return { ...(raw as unknown as ScanConfig), statistic: (raw.statistic as 'P' | 'B' | undefined) ?? 'B' };
+  return { ...(raw as unknown as ScanConfig), statistic: (raw.statistic as 'P' | 'B' | undefined) ?? 'B', mode: (raw.mode as ScanConfig['mode'] | undefined) ?? 'best-fit' };
 }
 
-/** Validate, load the bundle (path relative to `baseDir`), build the models at its fiducial cosmology, scan. */
-export function runScanFromConfig(raw: unknown, baseDir: string): ScaleCutScan {
-  const c = validateScanConfig(raw);
+/** The scan inputs of a validated config: the bundle (path relative to `baseDir`) and its models at the fiducial cosmology. */
+export function scanInputsFromConfig(c: ScanConfig, baseDir: string): ScaleCutScanInputs {
   const bundle = loadMeasurementBundle(isAbsolute(c.bundle) ? c.bundle : join(baseDir, c.bundle));
   const cosmology = validateCosmology(bundle.metadata.fiducialCosmology, { path: 'measurement.json: fiducialCosmology' });
   const spectrum = linearPowerFromCosmology(cosmology, bundle.metadata.redshift, c.linearPower);
-  const source = fixedModelSource(bundleModels(bundle, c.models)(spectrum));
-  return runScaleCutScan({
+  return {
     bundle,
-    source,
+    source: fixedModelSource(bundleModels(bundle, c.models)(spectrum)),
     parameters: c.parameters,
     covariance: c.covariance,
     statistic: c.statistic,
@@ -101,5 +126,46 @@ export function runScanFromConfig(raw: unknown, baseDir: string): ScaleCutScan {
     truth: c.truth,
     shiftThreshold: c.shiftThreshold,
     pValueLimit: c.pValueLimit,
-  });
+  };
+}
+
+/**
+ * The sampler's log-posterior of one cut (module reference
+ * { module: the library entry, exportName: "createScanStepLogPosterior", options }).
+ */
+export function createScanStepLogPosterior(options: { config: unknown; baseDir: string; kMax: number }): (theta: Float64Array) => number {
+  const ctx = scanContext(scanInputsFromConfig(validateScanConfig(options.config), options.baseDir));
+  const { likelihood } = scanStepLikelihood(ctx, options.kMax);
+  return (theta) => likelihood.logPosterior(theta);
+}
+
+/**
+ * Validate, load, scan. Mode "sampling" writes one chain per cut under
+ * `chainsDir` (default: a temporary folder) as `scan-kmax-<k>.csv` and `.json`.
+ */
+export async function runScanFromConfig(raw: unknown, baseDir: string, chainsDir?: string): Promise<ScaleCutScan> {
+  const c = validateScanConfig(raw);
+  const inputs = scanInputsFromConfig(c, baseDir);
+  if (c.mode === 'best-fit' || !c.sampling) return runScaleCutScan(inputs);
+  const settings = c.sampling;
+  const dir = chainsDir ?? mkdtempSync(join(tmpdir(), 'treble-scan-'));
+  mkdirSync(dir, { recursive: true });
+  const base = sampledParametersFromPriors(new ParameterSpace(c.parameters, inputs.source.providedNames));
+  const posterior: ScanPosterior = async (kMax, start) => {
+    const run = await sampleEnsemble({
+      parameters: base.map((p, i) => ({ ...p, start: start[i] })),
+      target: { module: trebleLibraryModule(), exportName: 'createScanStepLogPosterior', options: { config: raw, baseDir, kMax } },
+      output: join(dir, `scan-kmax-${kMax}`),
+      seed: settings.seed,
+      walkers: settings.walkers,
+      maxSteps: settings.maxSteps ?? 2000,
+      workers: settings.workers,
+      progress: 'off',
+      handleInterrupt: false,
+    });
+    const burn = run.diagnostics.burnInSteps;
+    const summaries = base.map((_, p) => meanAndSd(run.history.seriesByMember(p, burn)));
+    return { mean: Float64Array.from(summaries, (m) => m.mean), sd: Float64Array.from(summaries, (m) => m.sd) };
+  };
+  return runScaleCutScan(inputs, posterior);
 }

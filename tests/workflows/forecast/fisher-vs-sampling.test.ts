@@ -5,6 +5,7 @@ import { describe, expect, it } from 'vitest';
 import { fisherErrors } from '../../../src/inference/fisher/fisher-algebra.js';
 import { selectionFisher } from '../../../src/inference/fisher/selection-fisher.js';
 import { SourceModelVector } from '../../../src/inference/fisher/source-model-vector.js';
+import { meanAndSd } from '../../../src/inference/sampling/draw-summary.js';
 import { sampleEnsemble } from '../../../src/inference/sampling/sample-ensemble.js';
 import { TRUTH } from '../scale-cuts/scan-fixture.js';
 import { biasLikelihood } from './bias-posterior-target.js';
@@ -21,9 +22,7 @@ describe('Fisher errors against a sampled posterior', () => {
     const run = await sampleEnsemble({ parameters, target, output: join(mkdtempSync(join(tmpdir(), 'treble-fisher-')), 'bias'), seed: 11, workers: 0, progress: 'off', handleInterrupt: false, walkers: 16, maxSteps: 3000 });
     const burn = run.diagnostics.burnInSteps;
     NAMES.forEach((name, p) => {
-      const draws = run.history.seriesByMember(p, burn).flatMap((s) => Array.from(s));
-      const mean = draws.reduce((a, b) => a + b, 0) / draws.length;
-      const sd = Math.sqrt(draws.reduce((a, b) => a + (b - mean) ** 2, 0) / (draws.length - 1));
+      const { sd } = meanAndSd(run.history.seriesByMember(p, burn));
       expect(Math.abs(sd / sigma[p] - 1), `${name}: sampled sd ${sd}, Fisher ${sigma[p]}`).toBeLessThan(0.2);
     });
   });

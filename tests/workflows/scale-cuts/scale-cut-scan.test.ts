@@ -19,9 +19,9 @@ const FREE_TIDAL: ParameterSpecs = {
 const oneLoopSized = (k: readonly number[]) => 1 + (k[0] ** 2 + k[1] ** 2 + k[2] ** 2) / (3 * 0.3 ** 2);
 
 describe('scale-cut scan', () => {
-  it('does not flag correctly specified noiseless data, and every shift stays far below the threshold', () => {
+  it('does not flag correctly specified noiseless data, and every shift stays far below the threshold', async () => {
     const { bundle, source } = scanFixture();
-    const scan = runScaleCutScan({ bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' }, statistic: 'B', kMaxValues: KMAX, truth: TRUTH, baseCuts: BASE });
+    const scan = await runScaleCutScan({ bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' }, statistic: 'B', kMaxValues: KMAX, truth: TRUTH, baseCuts: BASE });
     expect(scan.firstFlagged).toBeUndefined();
     // The marginal posterior mode differs from the truth only through the ln det term of the
     // analytic marginalisation over b2, bG2 and the shot amplitude: a few hundredths of a sigma.
@@ -30,9 +30,9 @@ describe('scale-cut scan', () => {
     expect(new Set(scan.steps.map((s) => s.dataPoints)).size).toBe(KMAX.length);
   });
 
-  it('flags the k_max where data with a one-loop-sized correction bias b1, and names the shape classes carrying chi2', () => {
+  it('flags the k_max where data with a one-loop-sized correction bias b1, and names the shape classes carrying chi2', async () => {
     const { bundle, source } = scanFixture({ distort: oneLoopSized });
-    const scan = runScaleCutScan({ bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' }, statistic: 'B', kMaxValues: KMAX, truth: TRUTH, baseCuts: BASE });
+    const scan = await runScaleCutScan({ bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' }, statistic: 'B', kMaxValues: KMAX, truth: TRUTH, baseCuts: BASE });
     const first = scan.firstFlagged;
     expect(first).toBeDefined();
     expect(first).toBeGreaterThan(0.08);
@@ -45,34 +45,34 @@ describe('scale-cut scan', () => {
     expect(last.chi2ByClass.squeezed).toBeGreaterThan(0);
   });
 
-  it('flags data made with a shifted tidal bias when the model ties bG2 to b1, and excludes shapes on request', () => {
+  it('flags data made with a shifted tidal bias when the model ties bG2 to b1, and excludes shapes on request', async () => {
     // Model: bG2 fixed at the local-Lagrangian value -2/7 (b1 - 1) = -0.2857 (REFERENCES.md);
     // data: bG2 shifted by +0.4.
     const { bundle, source } = scanFixture({ truth: { bG2: -2 / 7 + 0.4 } });
     const tied: ParameterSpecs = { b1: FREE_TIDAL.b1, b2: FREE_TIDAL.b2, bG2: { value: -2 / 7 }, bispShotPower: FREE_TIDAL.bispShotPower };
-    const scan = runScaleCutScan({ bundle, source, parameters: tied, covariance: { source: 'gaussian' }, statistic: 'B', kMaxValues: KMAX, truth: TRUTH, baseCuts: BASE });
+    const scan = await runScaleCutScan({ bundle, source, parameters: tied, covariance: { source: 'gaussian' }, statistic: 'B', kMaxValues: KMAX, truth: TRUTH, baseCuts: BASE });
     expect(scan.firstFlagged).toBeDefined();
-    const without = runScaleCutScan({ bundle, source, parameters: tied, covariance: { source: 'gaussian' }, statistic: 'B', kMaxValues: [0.16], truth: TRUTH, baseCuts: BASE, excludeShapes: ['squeezed', 'flattened'] });
+    const without = await runScaleCutScan({ bundle, source, parameters: tied, covariance: { source: 'gaussian' }, statistic: 'B', kMaxValues: [0.16], truth: TRUTH, baseCuts: BASE, excludeShapes: ['squeezed', 'flattened'] });
     expect(without.steps[0].chi2ByClass.squeezed).toBeUndefined();
     expect(without.steps[0].chi2ByClass.flattened).toBeUndefined();
     expect(without.steps[0].dataPoints).toBeLessThan(scan.steps.at(-1)!.dataPoints);
   });
 
-  it('adding a theoretical-error covariance widens the errors and reduces the shifts', () => {
+  it('adding a theoretical-error covariance widens the errors and reduces the shifts', async () => {
     const { bundle, source } = scanFixture({ distort: oneLoopSized });
     const args = { bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' } as const, statistic: 'B' as const, kMaxValues: [0.16], truth: TRUTH, baseCuts: BASE };
-    const plain = runScaleCutScan(args).steps[0];
-    const padded = runScaleCutScan({ ...args, theoryError: { amplitude: 0.1, kRef: 0.1, slope: 2, correlationLength: 0.05 } }).steps[0];
+    const plain = (await runScaleCutScan(args)).steps[0];
+    const padded = (await runScaleCutScan({ ...args, theoryError: { amplitude: 0.1, kRef: 0.1, slope: 2, correlationLength: 0.05 } })).steps[0];
     expect(padded.sigma.b1).toBeGreaterThan(plain.sigma.b1);
     expect(Math.abs(padded.shift.b1)).toBeLessThan(Math.abs(plain.shift.b1));
   });
 
-  it('refuses bad input, naming the key', () => {
+  it('refuses bad input, naming the key', async () => {
     const { bundle, source } = scanFixture({ bKMax: 0.08 });
     const args = { bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' } as const, statistic: 'B' as const, kMaxValues: [0.08] };
-    expect(() => runScaleCutScan({ ...args, kMaxValues: [] })).toThrow(/kMaxValues/);
-    expect(() => runScaleCutScan({ ...args, pValueLimit: 2 })).toThrow(/pValueLimit/);
-    expect(() => runScaleCutScan({ ...args, excludeShapes: ['pointy'] })).toThrow(/unknown shape class "pointy"/);
-    expect(() => runScaleCutScan({ ...args, truth: { b2: 1 } })).toThrow(InputError);
+    await expect(runScaleCutScan({ ...args, kMaxValues: [] })).rejects.toThrow(/kMaxValues/);
+    await expect(runScaleCutScan({ ...args, pValueLimit: 2 })).rejects.toThrow(/pValueLimit/);
+    await expect(runScaleCutScan({ ...args, excludeShapes: ['pointy'] })).rejects.toThrow(/unknown shape class "pointy"/);
+    await expect(runScaleCutScan({ ...args, truth: { b2: 1 } })).rejects.toThrow(InputError);
   });
 });

@@ -48,6 +48,20 @@ describe('treble scan', () => {
     expect(JSON.parse(readFileSync(join(dir, 'out', 'scan.json'), 'utf8')).firstFlagged).toBe(0.16);
   });
 
+  it('sampling mode: a short ensemble run per cut, shifts in posterior standard deviations', async () => {
+    const config = JSON.parse(readFileSync(join(dir, 'scan.json'), 'utf8'));
+    writeFileSync(join(dir, 'scan-mcmc.json'), JSON.stringify({ ...config, kMax: [0.06, 0.16], mode: 'sampling', sampling: { seed: 3, walkers: 8, maxSteps: 400, workers: 0 } }));
+    const out = await run(['scan', join(dir, 'scan-mcmc.json'), '--out', join(dir, 'out-mcmc')]);
+    expect(process.exitCode).toBeUndefined();
+    const scan = JSON.parse(readFileSync(join(dir, 'out-mcmc', 'scan.json'), 'utf8'));
+    expect(scan.mode).toBe('sampling');
+    expect(out).toMatch(/posterior standard deviations/);
+    // One chain per cut; the conservative cut is unbiased, the widest one flagged as in fast mode.
+    expect(existsSync(join(dir, 'out-mcmc', 'chains', 'scan-kmax-0.16.csv'))).toBe(true);
+    expect(Math.abs(scan.steps[0].shift.b1)).toBeLessThan(0.5);
+    expect(scan.firstFlagged).toBe(0.16);
+  });
+
   it('lists every config problem at once and exits 2', async () => {
     writeFileSync(join(dir, 'bad.json'), JSON.stringify({ bundle: '', kMax: [0.1, -1], statistic: 'Q', covariance: { source: 'nope' }, extra: 1 }));
     const out = await run(['scan', join(dir, 'bad.json')]);
