@@ -1,4 +1,5 @@
 import { InputError } from '../contracts/input-error.js';
+import { InterruptedError } from '../contracts/interrupted-error.js';
 
 /** Exit codes of the treble CLI (documented in README.md). */
 export const EXIT = {
@@ -22,6 +23,11 @@ export function action<A extends unknown[]>(fn: (...args: A) => Promise<void> | 
     try {
       await fn(...args);
     } catch (err) {
+      if (err instanceof InterruptedError) {
+        process.stderr.write(`treble: ${err.message}\n`);
+        process.exitCode = EXIT.interrupted;
+        return;
+      }
       if (err instanceof InputError) {
         process.stderr.write(`treble: ${err.message}\n`);
         if (err.hint) process.stderr.write(`hint: ${err.hint}\n`);

@@ -6,6 +6,7 @@ import { validateCovarianceOptions } from '../../data/covariance/covariance-choi
 import { loadMeasurementBundle } from '../../data/measurement-bundle.js';
 import { selectData, type ScaleCuts } from '../../data/scale-cuts.js';
 import type { JointLikelihoodOptions } from '../../inference/likelihood/joint-likelihood-options.js';
+import { PROVIDED_QUANTITIES } from '../../inference/likelihood/model-source.js';
 import { ParameterSpace } from '../../inference/parameters/parameter-space.js';
 import { parseJsonWithLines, type JsonWithLines } from '../../io/json-with-lines.js';
 
@@ -48,7 +49,6 @@ const SAMPLER_KEYS = {
   chains: [...SAMPLER_COMMON, 'chains', 'adaptAfter', 'regularization', 'warmupFraction', 'maxRhat', 'minEss'],
 } as const;
 const PEAK_KEYS = ['starts', 'seed'];
-const PROVIDED_BY_MODE: Record<string, readonly string[]> = { full: ['sigma8', 'fsigma8', 'growthRate'], 'fixed-template': ['sigma8', 'f'] };
 
 type Json = Record<string, unknown>;
 const isObject = (v: unknown): v is Json => typeof v === 'object' && v !== null && !Array.isArray(v);
@@ -182,7 +182,7 @@ export function readRunConfig(path: string): RunConfig {
       if (c.cosmology.template !== undefined) collect(problems, '', () => validateCosmology(c.cosmology && (c.cosmology as Json).template, { path: 'cosmology.template', file, lineOf: (k) => json.lineOf(`cosmology.template.${k}`) }));
     }
   }
-  if (c.parameters !== undefined) collect(problems, '', () => new ParameterSpace(c.parameters as never, PROVIDED_BY_MODE[mode] ?? []));
+  if (c.parameters !== undefined) collect(problems, '', () => new ParameterSpace(c.parameters as never, mode === 'full' || mode === 'fixed-template' ? PROVIDED_QUANTITIES[mode] : []));
   if (c.models !== undefined && !isObject(c.models)) problems.push(`${at('models')}: must be an object { power?, bispectrum? }`);
   if (c.covarianceFiducial !== undefined) {
     if (!isObject(c.covarianceFiducial)) problems.push(`${at('covarianceFiducial')}: must be an object of named values`);

@@ -1,4 +1,5 @@
 import { existsSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
+import { InterruptedError } from '../../contracts/interrupted-error.js';
 import { join } from 'node:path';
 import { createJointLikelihood } from '../../inference/likelihood/joint-likelihood-options.js';
 import type { JointLikelihood } from '../../inference/likelihood/joint-likelihood.js';
@@ -65,6 +66,9 @@ export async function runJointFit(config: RunConfig, options: FitRunOptions = {}
   log(`  output: ${config.output}`);
   const result = config.sampler.method === 'chains' ? await sampleIndependentChains(common) : await sampleEnsemble(common);
   log(`sampling stopped: ${result.stopReason} after ${result.steps} steps (burn-in ${result.diagnostics.burnInSteps})`);
+  if (result.stopReason === 'interrupted') {
+    throw new InterruptedError(`interrupted after ${result.steps} steps; the checkpoint in ${config.output} is intact: continue with \`treble fit --resume ${config.file}\`, or summarise what there is with \`treble report ${config.file}\``);
+  }
   return finishFit(config, likelihood, { workers, log });
 }
 
