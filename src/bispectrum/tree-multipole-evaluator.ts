@@ -139,12 +139,6 @@ export class TreeMultipoleEvaluator {
         const o9 = 9 * i;
         this.sidePowers(s, i, sides);
         const wn = weight[i];
-        const n1k = sides[0];
-        const n2k = sides[1];
-        const n3k = sides[2];
-        const w1k = sides[3];
-        const w2k = sides[4];
-        const w3k = sides[5];
         const i1 = 1 / k1;
         const i2 = 1 / k2;
         const i3 = 1 / k3;
@@ -155,9 +149,9 @@ export class TreeMultipoleEvaluator {
           const q1 = m1 * m1;
           const q2 = m2 * m2;
           const q3 = m3 * m3;
-          const P1 = ir ? n1k + w1k * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : n1k + w1k;
-          const P2 = ir ? n2k + w2k * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : n2k + w2k;
-          const P3 = ir ? n3k + w3k * Math.exp(-k3 * k3 * q3 * (aIR + cIR * q3)) : n3k + w3k;
+          const P1 = ir ? sides[0] + sides[3] * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : sides[0] + sides[3];
+          const P2 = ir ? sides[1] + sides[4] * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : sides[1] + sides[4];
+          const P3 = ir ? sides[2] + sides[5] * Math.exp(-k3 * k3 * q3 * (aIR + cIR * q3)) : sides[2] + sides[5];
           const damp = halfSv2 > 0 ? Math.exp(-halfSv2 * (k1 * k1 * q1 + k2 * k2 * q2 + k3 * k3 * q3)) : 1;
           for (let t = 0; t < 14; t++) v[t] = 0;
           addPairTemplates(v, 0, 2 * damp * P1 * P2, -m3 * k3, i1, i2, m1, m2, m3, pk[o9], pk[o9 + 1], pk[o9 + 2]);
