@@ -10,7 +10,14 @@ import { InputError } from '../../contracts/input-error.js';
  * derivative is their Richardson combination (4 D(h/2) - D(h)) / 3, and a
  * parameter whose two estimates differ by more than `stabilityTolerance`
  * (in the C^{-1} norm) is named in `warnings`.
+ *
+ * A parameter that moves the model, over a change of max(|fiducial|, step),
+ * by less than NO_INFORMATION_FRACTION of the model itself (both in the
+ * C^{-1} norm) carries no information beyond rounding: its row and column
+ * are set to zero, with a warning, so that inverting the matrix names it.
  */
+export const NO_INFORMATION_FRACTION = 1e-10;
+
 export type ModelVectorFunction = (params: Readonly<Record<string, number>>) => Float64Array;
 
 /** Applies C^{-1} to a vector: out = C^{-1} v. */
@@ -76,18 +83,20 @@ export function fisherMatrix(setup: FisherSetup): FisherMatrix {
   const warnings: string[] = [];
   const derivatives: Float64Array[] = [];
   const weighted: Float64Array[] = [];
+  const scales: number[] = [];
   for (const name of names) {
     const value = setup.fiducial[name];
     if (value === undefined || !Number.isFinite(value)) {
       throw new InputError(`Fisher matrix: parameter "${name}" has no finite fiducial value`);
     }
     const exact = setup.exactDerivatives?.[name];
+    const h = setup.steps?.[name] ?? defaultStep(value);
+    if (!(h > 0)) throw new InputError(`Fisher matrix: step for "${name}" must be positive, got ${h}`);
+    scales.push(Math.max(Math.abs(value), h));
     let d: Float64Array;
     if (exact) {
       d = exact;
     } else {
-      const h = setup.steps?.[name] ?? defaultStep(value);
-      if (!(h > 0)) throw new InputError(`Fisher matrix: step for "${name}" must be positive, got ${h}`);
       const { derivative, coarse, fine } = twoStepDerivative(setup.model, setup.fiducial, name, h);
       d = derivative;
       const diff = new Float64Array(fine.length);
@@ -112,5 +121,14 @@ export function fisherMatrix(setup: FisherSetup): FisherMatrix {
       matrix[b * n + a] = v;
     }
   }
+  const m0 = setup.model(setup.fiducial);
+  const signal = Math.sqrt(Math.max(dot(m0, setup.precision(m0)), 0));
+  names.forEach((name, a) => {
+    const effect = Math.sqrt(Math.max(matrix[a * n + a], 0)) * scales[a];
+    if (signal > 0 && effect < NO_INFORMATION_FRACTION * signal) {
+      for (let b = 0; b < n; b++) matrix[a * n + b] = matrix[b * n + a] = 0;
+      warnings.push(`"${name}" changes the model by ${(effect / signal).toExponential(1)} of itself over ${scales[a]}: no information beyond rounding (row and column set to zero)`);
+    }
+  });
   return { names: [...names], matrix, warnings };
 }

@@ -57,6 +57,10 @@ describe('Fisher matrix', () => {
     expect(() => fisherErrors(f)).toThrow(/combination.*\ba\b.*\bb\b|combination.*\bb\b.*\ba\b/);
     const g = fisherMatrix({ names: ['a', 'z'], fiducial: { a: 1, z: 1 }, model: (p) => Float64Array.of(p.a), precision: (v) => Float64Array.from(v) });
     expect(() => fisherErrors(g)).toThrow(/"z"/);
+    // A derivative at rounding level (1e-14 of the signal) counts as no information.
+    const r = fisherMatrix({ names: ['a', 'z'], fiducial: { a: 1, z: 1 }, model: (p) => Float64Array.of(p.a, 1 + 1e-14 * p.z), precision: (v) => Float64Array.from(v) });
+    expect(r.warnings.join()).toMatch(/"z" changes the model by .* no information/);
+    expect(() => fisherErrors(r)).toThrow(/do not constrain "z" at all/);
   });
 
   it('adds a Gaussian prior as inverse variances (1/sigma^2 = F + 1/sigma_prior^2 for one parameter)', () => {

@@ -68,4 +68,12 @@ describe('Fisher forecast of a survey', () => {
     expect(bad({ power: { kMin: 0.01, kMax: 0.005, dk: 0.01 }, colour: 1 })).toThrow(/colour is not a forecast key[\s\S]*power.kMax \(0.005\) is below kMin/);
     expect(bad({ parameters: ['b1', 'bQuux'] })).toThrow(InputError);
   });
+
+  it('reports a singular Fisher matrix, naming the parameter without information', () => {
+    // The constant shot noise has no quadrupole or hexadecapole: with P2 and P4 alone it is unconstrained.
+    const r = runForecast({ ...SMALL, parameters: ['b1', 'pStochConst'], power: { kMin: 0.01, kMax: 0.1, dk: 0.01, multipoles: [2, 4] }, bispectrum: null });
+    expect(r.sets.joint?.errors).toBeUndefined();
+    expect(r.sets.joint?.singular).toMatch(/do not constrain "pStochConst"/);
+    expect(r.warnings.join()).toMatch(/"pStochConst" changes the model/);
+  });
 });
