@@ -46,7 +46,7 @@ export interface FisherMatrix {
   readonly warnings: readonly string[];
 }
 
-export function defaultStep(value: number): number {
+export function defaultFisherStep(value: number): number {
   return value === 0 ? 0.01 : 0.01 * Math.abs(value);
 }
 
@@ -90,7 +90,7 @@ export function fisherMatrix(setup: FisherSetup): FisherMatrix {
       throw new InputError(`Fisher matrix: parameter "${name}" has no finite fiducial value`);
     }
     const exact = setup.exactDerivatives?.[name];
-    const h = setup.steps?.[name] ?? defaultStep(value);
+    const h = setup.steps?.[name] ?? defaultFisherStep(value);
     if (!(h > 0)) throw new InputError(`Fisher matrix: step for "${name}" must be positive, got ${h}`);
     scales.push(Math.max(Math.abs(value), h));
     let d: Float64Array;

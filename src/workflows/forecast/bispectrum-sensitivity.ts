@@ -1,8 +1,8 @@
 import { InputError } from '../../contracts/input-error.js';
 import { selectVector } from '../../data/scale-cuts.js';
-import { defaultStep, twoStepDerivative } from '../../inference/fisher/fisher-matrix.js';
+import { defaultFisherStep, twoStepDerivative } from '../../inference/fisher/fisher-matrix.js';
 import { renderTriangleShapeMapSvg } from '../../report/plots/triangle-shape-map.js';
-import { entryClass } from '../scale-cuts/shape-class-chi2.js';
+import { dataEntryShapeClass } from '../scale-cuts/shape-class-chi2.js';
 import { binForecastSetup, type BinForecastInputs } from './bin-forecast-setup.js';
 
 /**
@@ -48,7 +48,7 @@ export function bispectrumSensitivity(inp: Omit<BinForecastInputs, 'power'>): Bi
     const exact = columns[name];
     if (exact) derivative = selectVector(exact, indices);
     else {
-      const h = inp.steps?.[name] ?? defaultStep(setup.fiducial[name]);
+      const h = inp.steps?.[name] ?? defaultFisherStep(setup.fiducial[name]);
       const model = (p: Readonly<Record<string, number>>) => selectVector(setup.vector.evaluate(p), indices);
       derivative = twoStepDerivative(model, setup.fiducial, name, h).derivative;
     }
@@ -56,7 +56,7 @@ export function bispectrumSensitivity(inp: Omit<BinForecastInputs, 'power'>): Bi
     const informationByClass: Record<string, number> = {};
     let total = 0;
     perSigma.forEach((v, a) => {
-      const c = entryClass(entries[indices[a]], inp.bispectrum?.dk ?? 0);
+      const c = dataEntryShapeClass(entries[indices[a]], inp.bispectrum?.dk ?? 0);
       informationByClass[c] = (informationByClass[c] ?? 0) + v * v;
       total += v * v;
     });

@@ -14,7 +14,7 @@ import { ParameterSpace, type ParameterSpecs } from '../../inference/parameters/
 import { sampledParametersFromPriors } from '../../inference/sampling/sampled-parameters-from-priors.js';
 import { validateSampledParameters } from '../../inference/sampling/sampled-parameter.js';
 import { scanSelection } from './scan-selection.js';
-import { chiSquareByClass, type EntryClass } from './shape-class-chi2.js';
+import { chiSquareByClass, type DataEntryShapeClass } from './shape-class-chi2.js';
 import { theoryErrorCovariance, type TheoryErrorEntry, type TheoryErrorEnvelope } from './theory-error-covariance.js';
 
 /**
@@ -65,7 +65,7 @@ export interface ScanStep {
   readonly chi2: number;
   readonly dof: number;
   readonly pValue: number;
-  readonly chi2ByClass: Readonly<Partial<Record<EntryClass, number>>>;
+  readonly chi2ByClass: Readonly<Partial<Record<DataEntryShapeClass, number>>>;
   readonly flagged: boolean;
   readonly reasons: readonly string[];
 }
@@ -127,7 +127,7 @@ export function scanContext(inp: ScaleCutScanInputs): ScanContext {
 }
 
 /** The likelihood of one cut: selection (with shape exclusion), covariance (plus theory error), classes of the kept entries. */
-export function scanStepLikelihood(ctx: ScanContext, kMax: number): { selection: DataSelection; classes: EntryClass[]; covariance: PreparedCovariance; likelihood: JointLikelihood } {
+export function scanStepLikelihood(ctx: ScanContext, kMax: number): { selection: DataSelection; classes: DataEntryShapeClass[]; covariance: PreparedCovariance; likelihood: JointLikelihood } {
   const inp = ctx.inputs;
   const { selection, classes } = scanSelection(inp.bundle, inp.baseCuts ?? {}, inp.statistic, kMax, inp.excludeShapes ?? []);
   const prepared = prepareCovariance(inp.covariance, { bundle: inp.bundle, selection, theory: ctx.theory, freeParameters: ctx.space.dimension + ctx.linearNames.length });

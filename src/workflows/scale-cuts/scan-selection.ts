@@ -2,7 +2,7 @@ import { InputError } from '../../contracts/input-error.js';
 import { parseShapeClass } from '../../bispectrum/shape-classes.js';
 import type { MeasurementBundle } from '../../data/measurement-bundle.js';
 import { selectData, type DataSelection, type ScaleCuts } from '../../data/scale-cuts.js';
-import { entryClass, type EntryClass } from './shape-class-chi2.js';
+import { dataEntryShapeClass, type DataEntryShapeClass } from './shape-class-chi2.js';
 
 /**
  * The data kept at one step of a scale-cut scan: the base cuts with the
@@ -11,7 +11,7 @@ import { entryClass, type EntryClass } from './shape-class-chi2.js';
  * centre equals kMax up to a relative 1e-9 is kept (centres kMin + n dk carry
  * rounding errors).
  */
-export function scanSelection(bundle: MeasurementBundle, base: ScaleCuts, statistic: 'P' | 'B', kMax: number, excludeShapes: readonly string[]): { selection: DataSelection; classes: EntryClass[] } {
+export function scanSelection(bundle: MeasurementBundle, base: ScaleCuts, statistic: 'P' | 'B', kMax: number, excludeShapes: readonly string[]): { selection: DataSelection; classes: DataEntryShapeClass[] } {
   const limit = kMax * (1 + 1e-9);
   const limits: Record<string, object> = { ...base.limits };
   for (const key of Object.keys(limits)) if (key.startsWith(statistic)) limits[key] = { ...limits[key], kMax: limit };
@@ -20,9 +20,9 @@ export function scanSelection(bundle: MeasurementBundle, base: ScaleCuts, statis
   const excluded = new Set(excludeShapes.map((s) => parseShapeClass(s, 'excludeShapes')));
   const dk = bundle.bispectrum?.dk ?? 0;
   const keep: number[] = [];
-  const classes: EntryClass[] = [];
+  const classes: DataEntryShapeClass[] = [];
   cut.entries.forEach((e, a) => {
-    const c = entryClass(e, dk);
+    const c = dataEntryShapeClass(e, dk);
     if (c !== 'power' && excluded.has(c)) return;
     keep.push(a);
     classes.push(c);

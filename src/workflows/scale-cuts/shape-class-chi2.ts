@@ -6,9 +6,9 @@ import type { MeasuredEntry } from '../../data/data-vector.js';
  * Shape class of a data-vector entry: the triangle class of
  * src/bispectrum/shape-classes.ts for a bispectrum entry, "power" for a P entry.
  */
-export type EntryClass = ShapeClass | 'power';
+export type DataEntryShapeClass = ShapeClass | 'power';
 
-export function entryClass(e: MeasuredEntry, dk: number): EntryClass {
+export function dataEntryShapeClass(e: MeasuredEntry, dk: number): DataEntryShapeClass {
   if (e.statistic === 'P') return 'power';
   const [i, j, l] = e.shells;
   const [c1, c2, c3] = e.k;
@@ -21,9 +21,9 @@ export function entryClass(e: MeasuredEntry, dk: number): EntryClass {
  * (with a correlated covariance a share can be negative).
  * `precisionFactor` multiplies C^{-1} (Hartlap).
  */
-export function chiSquareByClass(residual: Float64Array, covariance: Float64Array, classes: readonly EntryClass[], precisionFactor = 1): Partial<Record<EntryClass, number>> {
+export function chiSquareByClass(residual: Float64Array, covariance: Float64Array, classes: readonly DataEntryShapeClass[], precisionFactor = 1): Partial<Record<DataEntryShapeClass, number>> {
   const w = choleskySolve(choleskyFactor(covariance, residual.length, 'scan covariance'), residual);
-  const out: Partial<Record<EntryClass, number>> = {};
+  const out: Partial<Record<DataEntryShapeClass, number>> = {};
   for (let i = 0; i < residual.length; i++) out[classes[i]] = (out[classes[i]] ?? 0) + precisionFactor * residual[i] * w[i];
   return out;
 }
