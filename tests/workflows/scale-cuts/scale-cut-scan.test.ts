@@ -67,6 +67,14 @@ describe('scale-cut scan', () => {
     expect(Math.abs(padded.shift.b1)).toBeLessThan(Math.abs(plain.shift.b1));
   });
 
+  it('scans the power-spectrum k_max too (B held at k_max 0.08): no flag on correct data, the P entries grow', async () => {
+    const { bundle, source } = scanFixture({ bKMax: 0.08 });
+    const scan = await runScaleCutScan({ bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' }, statistic: 'P', kMaxValues: [0.05, 0.1], truth: TRUTH });
+    expect(scan.firstFlagged).toBeUndefined();
+    expect(scan.steps[1].dataPoints - scan.steps[0].dataPoints).toBe(10); // P0 and P2 on 5 more bins
+    expect(scan.steps[1].sigma.b1).toBeLessThan(scan.steps[0].sigma.b1);
+  });
+
   it('refuses bad input, naming the key', async () => {
     const { bundle, source } = scanFixture({ bKMax: 0.08 });
     const args = { bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' } as const, statistic: 'B' as const, kMaxValues: [0.08] };
