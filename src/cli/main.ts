@@ -2,7 +2,7 @@
 import { Command } from 'commander';
 import { commands } from './commands/index.js';
 import { setDebug } from './run-command.js';
-import { version } from './version.js';
+import { version } from '../io/package-version.js';
 
 const program = new Command();
 program

@@ -1,1 +1,2 @@
 export * from './json-with-lines.js';
+export * from './package-version.js';

@@ -3,7 +3,6 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Command } from 'commander';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { registerDemo } from '../../src/cli/commands/demo.js';
 import { registerLinearTheory } from '../../src/cli/commands/linear-theory.js';
 import { backgroundOf, GrowthHistory, linearPowerFromCosmology, readLinearTheoryConfig } from '../../src/cosmology/index.js';
 
@@ -12,7 +11,6 @@ const demoConfig = join('data-demo', 'demo-cosmology.json');
 async function run(args: string[]): Promise<void> {
   const program = new Command().exitOverride();
   registerLinearTheory(program);
-  registerDemo(program);
   await program.parseAsync(['node', 'treble', ...args]);
 }
 
@@ -84,14 +82,5 @@ describe('treble linear', () => {
     } finally {
       rmSync(dir, { recursive: true, force: true });
     }
-  });
-
-  it('demo prints the linear-theory quantities of the invented demo cosmology', async () => {
-    const stdout = vi.spyOn(process.stdout, 'write').mockImplementation(() => true);
-    await run(['demo']);
-    const text = stdout.mock.calls.map((c) => String(c[0])).join('');
-    expect(text).toMatch(/Invented demo scenario/);
-    expect(text).toMatch(/sigma8 total matter at z = 0\s+0\.8\d+/);
-    expect(process.exitCode).toBeUndefined();
   });
 });

@@ -10,6 +10,7 @@ import {
   logSpacedWavenumbers,
   readLinearTheoryConfig,
 } from '../../cosmology/index.js';
+import { numberOption } from '../cli-options.js';
 import { action } from '../run-command.js';
 
 interface LinearOptions {
@@ -19,12 +20,6 @@ interface LinearOptions {
   out?: string;
   background?: string;
   z?: string;
-}
-
-function numberOption(name: string, text: string): number {
-  const v = Number(text);
-  if (text.trim() === '' || !Number.isFinite(v)) throw new InputError(`--${name} must be a number, got "${text}"`);
-  return v;
 }
 
 function redshiftList(text: string): number[] {

@@ -1,10 +1,9 @@
 import { writeFileSync } from 'node:fs';
-import { dirname, resolve } from 'node:path';
 import type { Command } from 'commander';
 import { InputError } from '../../contracts/input-error.js';
-import type { LinearSpectrum } from '../../contracts/linear-spectrum.js';
-import { linearPowerFromCosmology, linearSpectrumFromTable, readLinearTheoryConfig, readPowerTable } from '../../cosmology/index.js';
+import { linearSpectrumOfConfig, readLinearTheoryConfig } from '../../cosmology/index.js';
 import { PowerMultipoleModel, POWER_PARAMETER_NAMES, powerMultipoleCsv, type PowerBinAveraging } from '../../power/index.js';
+import { numberOption, parameterAssignments } from '../cli-options.js';
 import { action } from '../run-command.js';
 
 interface MultipoleOptions {
@@ -20,24 +19,6 @@ interface MultipoleOptions {
   out?: string;
 }
 
-function numberOption(name: string, text: string): number {
-  const v = Number(text);
-  if (text.trim() === '' || !Number.isFinite(v)) throw new InputError(`--${name} must be a number, got "${text}"`);
-  return v;
-}
-
-function parameterAssignments(items: string[]): Record<string, number> {
-  const out: Record<string, number> = {};
-  for (const item of items) {
-    const [name, value, extra] = item.split('=');
-    if (value === undefined || extra !== undefined || !POWER_PARAMETER_NAMES.includes(name)) {
-      throw new InputError(`--set ${item}: expected name=value with name one of ${POWER_PARAMETER_NAMES.join(', ')}`);
-    }
-    out[name] = numberOption(`set ${name}`, value);
-  }
-  return out;
-}
-
 function averagingOf(opts: MultipoleOptions): PowerBinAveraging {
   const box = opts.box === undefined ? undefined : numberOption('box', opts.box);
   if (opts.average === 'centre') return { kind: 'centre' };
@@ -47,13 +28,6 @@ function averagingOf(opts: MultipoleOptions): PowerBinAveraging {
     return { kind: 'lattice', boxSize: box };
   }
   throw new InputError(`--average must be centre, mean-k or lattice, got "${opts.average}"`);
-}
-
-function spectrumOf(configPath: string): LinearSpectrum {
-  const config = readLinearTheoryConfig(configPath);
-  if (config.powerTable === undefined) return linearPowerFromCosmology(config.cosmology, config.redshift);
-  const table = readPowerTable(resolve(dirname(configPath), config.powerTable));
-  return linearSpectrumFromTable(table, config.cosmology, config.redshift);
 }
 
 /** `treble multipoles <config>`: P0, P2, P4 per k bin of a linear-theory config, as CSV. */
@@ -75,14 +49,14 @@ export function registerPowerMultipoles(program: Command): void {
     .action(
       action((configPath: string, opts: MultipoleOptions) => {
         const model = new PowerMultipoleModel({
-          spectrum: spectrumOf(configPath),
+          spectrum: linearSpectrumOfConfig(readLinearTheoryConfig(configPath)),
           bins: { kMin: numberOption('kmin', opts.kmin), dk: numberOption('dk', opts.dk), count: numberOption('bins', opts.bins) },
           nbar: numberOption('nbar', opts.nbar),
           multipoles: opts.ell.split(',').map((s) => numberOption('ell', s)),
           averaging: averagingOf(opts),
           muNodes: numberOption('mu-nodes', opts.muNodes),
         });
-        const csv = powerMultipoleCsv(model, model.evaluate(parameterAssignments(opts.set)));
+        const csv = powerMultipoleCsv(model, model.evaluate(parameterAssignments(opts.set, POWER_PARAMETER_NAMES)));
         if (opts.out === undefined) process.stdout.write(csv);
         else writeFileSync(opts.out, csv);
       }),

@@ -1,4 +1,4 @@
-import { version } from '../../cli/version.js';
+import { version } from '../../io/package-version.js';
 import type { ChainFilePaths } from './chain-files.js';
 import type { FailureCounts } from './failure-tally.js';
 import type { RunDiagnostics, SamplingMethod } from './sampling-method.js';

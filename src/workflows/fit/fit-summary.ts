@@ -1,6 +1,6 @@
 import type { JointLikelihood } from '../../inference/likelihood/joint-likelihood.js';
 import type { ModeSearchResult } from '../../inference/optimize/find-posterior-mode.js';
-import { version } from '../../cli/version.js';
+import { version } from '../../io/package-version.js';
 import { fitAssumptions, type Assumption } from './fit-assumptions.js';
 import { keptSeries, type FinishedRun } from './finished-run.js';
 import { posteriorRow, type PosteriorRow } from './posterior-summary.js';

@@ -20,7 +20,7 @@ function sigmaOf(r: ForecastResult, set: StatisticSet, name: string, kind: 'marg
 
 export function renderForecastTable(r: ForecastResult): string {
   const lines = ['Assumptions:', ...r.assumptions.map((a) => `  - ${a}`), ''];
-  r.bins.forEach((b, i) => lines.push(`bin ${i + 1}: z = ${b.zMin}-${b.zMax} (z_eff ${b.zEff}), V = ${fmt(b.volume)} (Mpc/h)^3, nbar = ${b.nbar} (h/Mpc)^3, b1 = ${fmt(b.bias.b1)}, b2 = ${fmt(b.bias.b2)}, bG2 = ${fmt(b.bias.bG2)}`));
+  r.bins.forEach((b, i) => lines.push(`bin ${i + 1}: z = ${b.zMin}-${b.zMax} (z_eff ${b.zEff}), V = ${fmt(b.volume)} (Mpc/h)^3, nbar = ${b.nbar} (h/Mpc)^3, b1 = ${fmt(b.bias.b1)}, b2 = ${fmt(b.bias.b2)}, bG2 = ${fmt(b.bias.bG2)}; ${r.dataPoints[i].power} P and ${r.dataPoints[i].bispectrum} B data points`));
   lines.push('', '| parameter | fiducial | sigma P | sigma B | sigma P+B | conditional P+B | P / P+B | B / P+B |', '| --- | --- | --- | --- | --- | --- | --- | --- |');
   for (const [name, value] of Object.entries(r.fiducial)) {
     const g = r.improvement[name];

@@ -32,6 +32,8 @@ export interface ForecastResult {
   /** Fiducial values of the joint parameters. */
   readonly fiducial: Readonly<Record<string, number>>;
   readonly improvement: Readonly<Record<string, { readonly overPower?: number; readonly overBispectrum?: number }>>;
+  /** Data points per redshift bin: P entries up to the power kMax, B entries. */
+  readonly dataPoints: readonly { readonly power: number; readonly bispectrum: number }[];
   readonly warnings: readonly string[];
   readonly assumptions: readonly string[];
 }
@@ -78,6 +80,7 @@ export function runForecast(raw: unknown): ForecastResult {
   const rename = (i: number) => (n: string) => (isCosmology(n) || bins.length === 1 ? n : `${n}_z${i + 1}`);
   const perSet: Record<StatisticSet, FisherMatrix[]> = { power: [], bispectrum: [], joint: [] };
   const fiducial: Record<string, number> = {};
+  const dataPoints: { power: number; bispectrum: number }[] = [];
   bins.forEach((bin, i) => {
     const set = binFisherSet({ bin, cosmology: spec.cosmology, names: spec.parameters, nuisance: spec.nuisance, power: spec.power, bispectrum: spec.bispectrum, steps: spec.steps, linearPower: spec.linearPower, models: spec.models, label: `survey.bins[${i}]` });
     const r = rename(i);
@@ -86,6 +89,7 @@ export function runForecast(raw: unknown): ForecastResult {
     if (set.bispectrum) perSet.bispectrum.push(renamed(set.bispectrum));
     perSet.joint.push(renamed(set.joint));
     for (const n of spec.parameters) fiducial[r(n)] = set.fiducial[n];
+    dataPoints.push(set.dataPoints);
   });
   const jointNames = Object.keys(fiducial);
   const prior = priorFisher(spec.prior, jointNames);
@@ -100,7 +104,7 @@ export function runForecast(raw: unknown): ForecastResult {
     improvement[n] = { ...(p !== undefined ? { overPower: p / j } : {}), ...(b !== undefined ? { overBispectrum: b / j } : {}) };
   }
   const warnings = [...new Set(perSet.joint.flatMap((f) => f.warnings))];
-  return { spec, bins, sets, fiducial, improvement, warnings, assumptions: forecastAssumptions(spec, bins) };
+  return { spec, bins, sets, fiducial, improvement, dataPoints, warnings, assumptions: forecastAssumptions(spec, bins) };
 }
 
 /** The spec and the resolved survey, with the problems of both listed at once. */

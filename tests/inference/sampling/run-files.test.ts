@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { Writable } from 'node:stream';
 import { describe, expect, it } from 'vitest';
-import { version } from '../../../src/cli/version.js';
+import { version } from '../../../src/io/package-version.js';
 import { ProgressDisplay } from '../../../src/inference/sampling/progress-display.js';
 import { sampleEnsemble } from '../../../src/inference/sampling/sample-ensemble.js';
 import type { ChainSidecar } from '../../../src/inference/sampling/sidecar.js';
