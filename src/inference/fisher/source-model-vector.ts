@@ -28,11 +28,6 @@ export class SourceModelVector {
     return this.composite.model;
   }
 
-  /** Names every model reads. */
-  parameterNames(values: ParameterValues): string[] {
-    return this.compositeFor(this.source.prepare(values).models).parameterNames;
-  }
-
   /** Names the composite model is exactly linear in (every model reading the name is linear in it). */
   linearNames(values: ParameterValues): string[] {
     const models = this.source.prepare(values).models;

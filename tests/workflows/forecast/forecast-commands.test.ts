@@ -39,6 +39,9 @@ describe('treble forecast and treble sensitivity', () => {
     expect(process.exitCode).toBeUndefined();
     expect(out).toMatch(/\| b1 \| [\d.]+ \| [\d.e-]+ \| [\d.e-]+ \| [\d.e-]+ \|/);
     expect(out).toMatch(/bias defaulted: bin 1: b1, b2, bG2/);
+    // P0, P2, P4 on 10 k bins; B0 on shells n = 0..3 (centres 0.02 (n + 1)): bins i >= j >= l with
+    // c_i - c_j - c_l < 1.5 dk, i.e. i - j - l <= 2: 1 + 3 + 6 + 9 = 19 (counted by hand).
+    expect(out).toMatch(/; 30 P and 19 B data points/);
     expect(readFileSync(join(dir, 'out', 'ellipse-b2-bG2.svg'), 'utf8')).toMatch(/^<svg/);
     expect(JSON.parse(readFileSync(join(dir, 'out', 'forecast.json'), 'utf8')).sets.joint.names).toEqual(['b1', 'b2', 'bG2']);
   });
