@@ -12,6 +12,7 @@ import { sampleEnsemble } from '../../inference/sampling/sample-ensemble.js';
 import { sampleIndependentChains } from '../../inference/sampling/sample-independent-chains.js';
 import { sampledParametersFromPriors } from '../../inference/sampling/sampled-parameters-from-priors.js';
 import { fitAssumptions } from './fit-assumptions.js';
+import { lockOutputFolder } from './output-lock.js';
 import { CHAIN_STEM, loadFinishedRun } from './finished-run.js';
 import { summariseFit, type FitSummary } from './fit-summary.js';
 import type { RunConfig } from './run-config.js';
@@ -47,8 +48,16 @@ export async function runJointFit(config: RunConfig, options: FitRunOptions = {}
   log(`treble fit: ${config.title}`);
   for (const a of fitAssumptions(config, likelihood)) log(`  ${a.key}: ${a.value}`);
   mkdirSync(config.output, { recursive: true });
+  const unlock = lockOutputFolder(config.output);
+  try {
+    return await sampleAndFinish(config, likelihood, options, log);
+  } finally {
+    unlock();
+  }
+}
+
+async function sampleAndFinish(config: RunConfig, likelihood: JointLikelihood, options: FitRunOptions, log: (line: string) => void): Promise<FitSummary> {
   if (options.fresh) removeEarlierRun(config.output);
-  writeFileSync(join(config.output, 'run-config.json'), `${JSON.stringify({ configFile: config.file }, null, 2)}\n`);
   const parameters = sampledParametersFromPriors(likelihood.parameters);
   const target = logPosteriorTarget(config);
   const workers = options.workers ?? config.sampler.workers;
