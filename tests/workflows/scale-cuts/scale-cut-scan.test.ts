@@ -75,6 +75,15 @@ describe('scale-cut scan', () => {
     expect(scan.steps[1].sigma.b1).toBeLessThan(scan.steps[0].sigma.b1);
   });
 
+  it('without a truth, measures shifts from the most conservative cut', async () => {
+    const { bundle, source } = scanFixture({ distort: oneLoopSized });
+    const scan = await runScaleCutScan({ bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' }, statistic: 'B', kMaxValues: [0.16, 0.06, 0.12], baseCuts: BASE });
+    expect(scan.reference).toBe('most conservative cut');
+    expect(scan.steps.map((s) => s.kMax)).toEqual([0.06, 0.12, 0.16]);
+    expect(scan.steps[0].shift.b1).toBe(0);
+    expect(scan.firstFlagged).toBe(0.16);
+  });
+
   it('refuses bad input, naming the key', async () => {
     const { bundle, source } = scanFixture({ bKMax: 0.08 });
     const args = { bundle, source, parameters: FREE_TIDAL, covariance: { source: 'gaussian' } as const, statistic: 'B' as const, kMaxValues: [0.08] };
