@@ -6,6 +6,10 @@ import { pathToFileURL } from 'node:url';
 import { chromium, type BrowserContext } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { renderReportHtml } from '../../src/report/html/render-report.js';
+import { writeFitReport } from '../../src/workflows/fit/fit-report.js';
+import { readRunConfig } from '../../src/workflows/fit/run-config.js';
+import { runJointFit } from '../../src/workflows/fit/run-fit.js';
+import { QUIET, writeSmallFitProblem } from '../workflows/fit/support/small-fit-problem.js';
 import { syntheticReportInput } from './synthetic-report.js';
 
 const CHROMIUM = '/usr/bin/chromium';
@@ -53,10 +57,8 @@ describe('the HTML report in headless Chromium', () => {
     expect(existsSync(CHROMIUM), MISSING).toBe(true);
   });
 
-  it('opens with no console errors or outside requests, every plot visible and drawn', async () => {
+  async function checkReportFile(file: string, figures: number): Promise<void> {
     const page = await browser().newPage();
-    const file = join(folder, 'report.html');
-    writeFileSync(file, renderReportHtml(input));
     const problems: string[] = [];
     const requests: string[] = [];
     page.on('console', (m) => {
@@ -67,9 +69,9 @@ describe('the HTML report in headless Chromium', () => {
     await page.goto(pathToFileURL(file).href, { waitUntil: 'load' });
 
     const svgs = page.locator('figure > svg');
-    expect(await svgs.count()).toBe(input.figures.length);
-    expect(await page.locator('svg').count()).toBe(input.figures.length);
-    for (let i = 0; i < input.figures.length; i++) {
+    expect(await svgs.count()).toBe(figures);
+    expect(await page.locator('svg').count()).toBe(figures);
+    for (let i = 0; i < figures; i++) {
       const svg = svgs.nth(i);
       await svg.scrollIntoViewIfNeeded();
       expect(await svg.isVisible(), `figure ${i + 1} visible`).toBe(true);
@@ -91,7 +93,19 @@ describe('the HTML report in headless Chromium', () => {
     expect(problems).toEqual([]);
     expect(requests.filter((u) => !u.startsWith('file:') && !u.startsWith('data:'))).toEqual([]);
     await page.close();
+  }
+
+  it('opens with no console errors or outside requests, every plot visible and drawn', async () => {
+    const file = join(folder, 'report.html');
+    writeFileSync(file, renderReportHtml(input));
+    await checkReportFile(file, input.figures.length);
   });
+
+  it('shows the report of a real (small) joint fit the same way', async () => {
+    const config = readRunConfig(writeSmallFitProblem(folder));
+    const summary = await runJointFit(config, QUIET);
+    await checkReportFile(writeFitReport(config, summary), 5);
+  }, 120_000);
 
   it('parses every plot as a standalone SVG file without XML errors', async () => {
     const page = await browser().newPage();
