@@ -86,7 +86,7 @@ export function demoRunConfig(): Record<string, unknown> {
       bispShotPower: marg(1, 2),
       bispShotConst: marg(1, 2),
     },
-    sampler: { method: 'ensemble', seed: 7, walkers: 24, maxSteps: 2500, checkEvery: 100, tauMultiple: 25 },
+    sampler: { method: 'ensemble', seed: 7, walkers: 24, maxSteps: 1000, checkEvery: 100, tauMultiple: 15, tauDrift: 0.05 },
     peak: { starts: 4 },
     output: '../treble-demo-run',
     truth: 'truth.json',
