@@ -87,7 +87,7 @@ export function demoRunConfig(): Record<string, unknown> {
       bispShotConst: marg(1, 2),
     },
     sampler: { method: 'ensemble', seed: 7, walkers: 24, maxSteps: 1000, checkEvery: 100, tauMultiple: 15, tauDrift: 0.05 },
-    peak: { starts: 4 },
+    peak: { starts: 0 },
     output: '../treble-demo-run',
     truth: 'truth.json',
   };

@@ -15,7 +15,7 @@ import type { RunConfig } from './run-config.js';
  * truth — each truth against the posterior. Holds nothing that changes
  * between two runs of the same config and seed.
  */
-export const DERIVED_DRAWS = 2000;
+export const DERIVED_DRAWS = 1000;
 
 export interface SummaryRow extends PosteriorRow {
   readonly kind: 'sampled' | 'derived';

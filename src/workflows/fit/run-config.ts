@@ -23,7 +23,11 @@ export interface SamplerChoice {
   readonly settings: Readonly<Record<string, number>>;
 }
 
+/** Optimiser starts drawn like the sampler's, besides the best draw (fit) or the parameters' starts (peak). */
+export const DEFAULT_PEAK_STARTS = 4;
+
 export interface PeakChoice {
+  /** Extra starts drawn like the sampler's starting points. */
   readonly starts: number;
   readonly seed: number;
 }
@@ -104,15 +108,15 @@ function samplerChoice(raw: unknown, at: (k: string) => string, problems: string
 }
 
 function peakChoice(raw: unknown, seed: number, at: (k: string) => string, problems: string[]): PeakChoice {
-  if (raw === undefined) return { starts: 8, seed };
+  if (raw === undefined) return { starts: DEFAULT_PEAK_STARTS, seed };
   if (!isObject(raw)) {
     problems.push(`${at('peak')}: must be an object { starts, seed }`);
-    return { starts: 8, seed };
+    return { starts: DEFAULT_PEAK_STARTS, seed };
   }
   for (const k of Object.keys(raw)) if (!PEAK_KEYS.includes(k)) problems.push(`${at(`peak.${k}`)}: not a key of peak (${PEAK_KEYS.join(', ')})`);
-  const starts = raw.starts ?? 8;
+  const starts = raw.starts ?? DEFAULT_PEAK_STARTS;
   const s = raw.seed ?? seed;
-  if (typeof starts !== 'number' || !Number.isInteger(starts) || starts < 1) problems.push(`${at('peak.starts')}: must be an integer >= 1, got ${JSON.stringify(starts)}`);
+  if (typeof starts !== 'number' || !Number.isInteger(starts) || starts < 0) problems.push(`${at('peak.starts')}: must be an integer >= 0, got ${JSON.stringify(starts)}`);
   if (typeof s !== 'number' || !Number.isInteger(s) || s < 0) problems.push(`${at('peak.seed')}: must be a non-negative integer, got ${JSON.stringify(s)}`);
   return { starts: Number(starts), seed: Number(s) };
 }
