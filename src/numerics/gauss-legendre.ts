@@ -1,3 +1,5 @@
+import { legendrePair } from './legendre.js';
+
 /**
  * Gauss–Legendre quadrature nodes and weights on [-1, 1] by Newton iteration on
  * the three-term Legendre recurrence (Abramowitz & Stegun 25.4.29; Press et al.,
@@ -20,36 +22,21 @@ export function gaussLegendre(n: number): QuadratureRule {
   const nodes = new Float64Array(n);
   const weights = new Float64Array(n);
   const half = Math.floor((n + 1) / 2);
+  const pair = new Float64Array(2);
+  // Derivative of L_n from L_n and L_{n-1} (A&S 22.8.5).
+  const derivative = (x: number) => {
+    legendrePair(n, x, pair);
+    return (n * (x * pair[0] - pair[1])) / (x * x - 1);
+  };
   for (let i = 0; i < half; i++) {
-    // Tricomi's initial guess for the i-th root.
+    // Tricomi's initial guess for the i-th root, then Newton steps.
     let x = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
-    let dp = 0;
     for (let iter = 0; iter < 100; iter++) {
-      let p0 = 1;
-      let p1 = x;
-      for (let j = 2; j <= n; j++) {
-        const p2 = ((2 * j - 1) * x * p1 - (j - 1) * p0) / j;
-        p0 = p1;
-        p1 = p2;
-      }
-      const pn = n === 1 ? x : p1;
-      const pnm1 = n === 1 ? 1 : p0;
-      dp = (n * (x * pn - pnm1)) / (x * x - 1);
-      const dx = pn / dp;
+      const dx = legendrePair(n, x, pair)[0] / derivative(x);
       x -= dx;
       if (Math.abs(dx) < 1e-16) break;
     }
-    // Recompute derivative at the converged root for the weight.
-    let p0 = 1;
-    let p1 = x;
-    for (let j = 2; j <= n; j++) {
-      const p2 = ((2 * j - 1) * x * p1 - (j - 1) * p0) / j;
-      p0 = p1;
-      p1 = p2;
-    }
-    const pn = n === 1 ? x : p1;
-    const pnm1 = n === 1 ? 1 : p0;
-    dp = (n * (x * pn - pnm1)) / (x * x - 1);
+    const dp = derivative(x);
     const w = 2 / ((1 - x * x) * dp * dp);
     nodes[i] = -x;
     nodes[n - 1 - i] = x;
