@@ -20,8 +20,12 @@ import {
   type TreeBispectrumSettings,
 } from './tree-settings.js';
 import { userTriangleNodes } from './user-triangles.js';
+import { discreteBoxBinAverage } from './lattice/discrete-box-average.js';
+import { latticeMemoisedSpectrum } from './lattice/memoised-spectrum.js';
+import type { TriangleIntegrand } from './triangle-integrand.js';
+import { TreeTemplateIntegrand } from './tree-template-integrand.js';
 
-export const BIN_AVERAGING_METHODS = ['centres', 'effective', 'continuous'] as const;
+export const BIN_AVERAGING_METHODS = ['centres', 'effective', 'continuous', 'box'] as const;
 export type BinAveragingMethod = (typeof BIN_AVERAGING_METHODS)[number];
 
 export interface TreeBispectrumModelOptions extends TreeBispectrumSettings {
@@ -39,6 +43,10 @@ export interface TreeBispectrumModelOptions extends TreeBispectrumSettings {
   readonly orientationNodes?: { readonly mu: number; readonly phi: number };
   /** Gauss–Legendre order of the continuous bin average; default DEFAULT_VOLUME_ORDER. */
   readonly volumeOrder?: number;
+  /** Side of the periodic box (Mpc/h) for averaging 'box': the exact average over its lattice triangles, line of sight along z. */
+  readonly boxSize?: number;
+  /** Cache folder of the discrete-box averages (default $TREBLE_CACHE_DIR, else ~/.cache/treble). */
+  readonly latticeCacheDir?: string;
   /** Re-tabulate the spectrum on a fine grid for fast lookups (TabulatedSpectrum); default true. */
   readonly tabulateSpectrum?: boolean;
 }
@@ -95,6 +103,8 @@ export class TreeBispectrumModel implements StatisticModel {
   private readonly kLo: number;
   private readonly kHi: number;
   private cachedTemplates: Float64Array | undefined;
+  /** Bins and box side when averaging over the lattice of a periodic box. */
+  private readonly box: { readonly bins: TriangleBins; readonly boxSize: number } | undefined;
 
   constructor(options: TreeBispectrumModelOptions) {
     const settings = resolveTreeSettings(options);
@@ -112,8 +122,15 @@ export class TreeBispectrumModel implements StatisticModel {
       const bins = options.bins as TriangleBins;
       const method = parseBinAveraging(options.averaging ?? 'continuous');
       const order = options.volumeOrder ?? DEFAULT_VOLUME_ORDER;
+      if (method === 'box') {
+        if (!(Number.isFinite(options.boxSize) && (options.boxSize as number) > 0)) {
+          throw new InputError(`bispectrum model: averaging "box" needs a positive boxSize in Mpc/h, got ${options.boxSize}`);
+        }
+        this.box = { bins, boxSize: options.boxSize as number };
+      }
+      // For 'box' the effective nodes only fix the wavenumber range checked against the linear spectrum.
       this.nodes =
-        method === 'centres' ? centreTriangleNodes(bins) : method === 'effective' ? effectiveTriangleNodes(bins, order) : continuousBinNodes(bins, order);
+        method === 'centres' ? centreTriangleNodes(bins) : method === 'effective' || method === 'box' ? effectiveTriangleNodes(bins, order) : continuousBinNodes(bins, order);
       for (let b = 0; b < bins.size; b++) labels.push(Array.from(bins.centres.subarray(3 * b, 3 * b + 3)));
     }
     let lo = Infinity;
@@ -141,15 +158,28 @@ export class TreeBispectrumModel implements StatisticModel {
     const key = NON_POLYNOMIAL.map((n) => params[n] ?? this.defaults[n]).join('|');
     if (this.cachedTemplates && key === this.cacheKey) return this.cachedTemplates;
     const { settings, rule } = this.prepare(params);
-    this.cachedTemplates = this.evaluatorFor(rule).templates(settings, false);
+    this.cachedTemplates = this.box ? this.boxAverage(new TreeTemplateIntegrand({ ...settings, spectrum: latticeMemoisedSpectrum(settings.spectrum, this.box.boxSize) })) : this.evaluatorFor(rule).templates(settings, false);
     this.cacheKey = key;
     return this.cachedTemplates;
+  }
+
+  /** Exact average over the box's lattice triangles, [bin][multipole][value], cached on disk; refuses bins without lattice triangles. */
+  private boxAverage(integrand: TriangleIntegrand): Float64Array {
+    const box = this.box as NonNullable<typeof this.box>;
+    const avg = discreteBoxBinAverage(box.bins, box.boxSize, integrand, { multipoles: this.multipoles, cacheDir: this.options.latticeCacheDir });
+    const empty = Array.from(avg.counts).findIndex((c) => c === 0);
+    if (empty >= 0) {
+      const c = Array.from(box.bins.centres.subarray(3 * empty, 3 * empty + 3));
+      throw new InputError(`bispectrum model: triangle bin ${empty + 1} (${c.join(', ')}) holds no triangle of the box lattice (L = ${box.boxSize} Mpc/h); drop it or use a larger box`);
+    }
+    return avg.values;
   }
 
   /** The direct path: B_l from TreeDirectIntegrand on the same nodes, rule and spectrum (layout of evaluate). */
   evaluateDirect(params: ParameterValues): Float64Array {
     const { settings, rule } = this.prepare(params);
-    const avg = averageOverTriangleNodes(this.nodes, new TreeDirectIntegrand(settings, this.polynomialParameters(params)), this.multipoles, rule);
+    const direct = new TreeDirectIntegrand(settings, this.polynomialParameters(params));
+    const avg = this.box ? this.boxAverage(direct) : averageOverTriangleNodes(this.nodes, direct, this.multipoles, rule);
     const nb = this.nodes.binCount;
     const nm = this.multipoles.length;
     const out = new Float64Array(nb * nm);

@@ -20,6 +20,8 @@ export interface BundleModelOptions {
     readonly volumeOrder?: number;
     readonly irResummation?: boolean;
     readonly velocityDispersion?: number;
+    /** Cache folder of discrete-box averages (averaging "box" uses the bundle's boxSize). */
+    readonly latticeCacheDir?: string;
   };
 }
 
@@ -57,6 +59,8 @@ export function bundleModels(bundle: MeasurementBundle, options: BundleModelOpti
           volumeOrder: b.volumeOrder,
           irResummation: b.irResummation,
           velocityDispersion: b.velocityDispersion,
+          boxSize: metadata.boxSize,
+          latticeCacheDir: b.latticeCacheDir,
         }),
       );
     }
