@@ -25,3 +25,4 @@ export * from './forecast/survey-sensitivity.js';
 export * from './scale-cuts/scan-config.js';
 export * from './fit/best-fit.js';
 export * from './demo/run-demo.js';
+export * from './fit/evaluate-model.js';

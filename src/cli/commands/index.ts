@@ -1,5 +1,6 @@
 import type { Command } from 'commander';
 import { registerDemo } from './demo.js';
+import { registerEvaluate } from './evaluate.js';
 import { registerFit } from './fit.js';
 import { registerMakeDemo } from './make-demo.js';
 import { registerPeak } from './peak.js';
@@ -15,4 +16,4 @@ import { registerScaleCutScan } from './scale-cut-scan.js';
 /** Each command module exports a function that adds itself to the program. */
 export type RegisterCommand = (program: Command) => void;
 
-export const commands: RegisterCommand[] = [registerDemo, registerFit, registerPeak, registerReport, registerMakeDemo, registerMockBox, registerLinearTheory, registerPowerMultipoles, registerTreeBispectrum, registerForecast, registerSensitivity, registerScaleCutScan];
+export const commands: RegisterCommand[] = [registerDemo, registerFit, registerEvaluate, registerPeak, registerReport, registerMakeDemo, registerMockBox, registerLinearTheory, registerPowerMultipoles, registerTreeBispectrum, registerForecast, registerSensitivity, registerScaleCutScan];
