@@ -8,17 +8,20 @@
  * alphaPar = alphaPerp = templateAmplitude = 1, exact discrete-box bin
  * averaging, b1, b2, bG2 sampled, fsigma8 fixed to the truth or sampled.
  *
- * Covariance: the diagonal of the sample covariance of the realisations
- * divided by R (the error of the mean). The full sample covariance of the
- * 142 entries is singular for R <= 142, so the diagonal is used, as in the
- * Gauss–Newton fit of scripts/mocks-second-order.ts.
+ * Covariance (--covariance): "diagonal" (default), the diagonal of the sample
+ * covariance of the realisations divided by R (the error of the mean), as in
+ * the Gauss–Newton fit of scripts/mocks-second-order.ts; the full sample
+ * covariance of the 142 entries is singular for R <= 142. "full" (needs
+ * R > 144): the full sample covariance / R, divided by the Hartlap factor
+ * (R - N - 2)/(R - 1) (Hartlap, Simon & Schneider 2007, eq. 17), so that its
+ * inverse is the unbiased precision of the mean.
  *
  * Stochastic terms: Gaussian white noise adds nothing to the mean bispectrum
  * (docs/conventions.md, "Mocks"), so bispShotPower = bispShotConst = 0; no IR
  * resummation (the mocks' linear field has the raw linear power); no
  * velocity dispersion. No power spectrum in the bundle (P is kept out of the fit).
  *
- *   npx tsx scripts/mocks-treble-fit.ts [--z 2] [--realisations 50] [--n 64] [--box 1000] [--kmax 0.1]
+ *   npx tsx scripts/mocks-treble-fit.ts [--z 2] [--realisations 50] [--n 64] [--box 1000] [--kmax 0.1] [--covariance diagonal|full]
  *       [--walkers 24] [--steps 1500] [--workers 2] [--out .treble-tmp/mocks-treble-fit]
  * Prints a JSON summary (recorded in docs/mocks-validation.md).
  */
@@ -41,8 +44,13 @@ const nbar = argValue('nbar', 1e-3);
 const walkers = argValue('walkers', 24);
 const maxSteps = argValue('steps', 1500);
 const workers = argValue('workers', 2);
-const outIndex = process.argv.indexOf('--out');
-const out = resolve(outIndex >= 0 ? process.argv[outIndex + 1] : '.treble-tmp/mocks-treble-fit', `z${redshift}-R${realisations}-n${n}`);
+const textArg = (name: string, fallback: string) => {
+  const i = process.argv.indexOf(`--${name}`);
+  return i >= 0 ? process.argv[i + 1] : fallback;
+};
+const covarianceKind = textArg('covariance', 'diagonal');
+if (covarianceKind !== 'diagonal' && covarianceKind !== 'full') throw new Error(`--covariance must be diagonal or full, got ${covarianceKind}`);
+const out = resolve(textArg('out', '.treble-tmp/mocks-treble-fit'), `z${redshift}-R${realisations}-n${n}-${covarianceKind}`);
 
 const spectrum = fiducialSpectrum(redshift);
 const b1True = argValue('b1', 2);
@@ -87,11 +95,24 @@ const nBins = columns.counts.length;
 // 2. Bundle of the mean with the (diagonal) covariance of the mean.
 const { mean, variance } = columnMoments(rows);
 const size = mean.length;
+const R = rows.length;
 const matrix = new Float64Array(size * size);
-for (let i = 0; i < size; i++) matrix[i * size + i] = variance[i] / rows.length;
+let hartlap = 1;
+if (covarianceKind === 'diagonal') {
+  for (let i = 0; i < size; i++) matrix[i * size + i] = variance[i] / R;
+} else {
+  if (R <= size + 2) throw new Error(`--covariance full needs more than ${size + 2} realisations, got ${R}`);
+  hartlap = (R - size - 2) / (R - 1);
+  for (const r of rows) {
+    for (let i = 0; i < size; i++) {
+      const di = r[i] - mean[i];
+      for (let j = 0; j < size; j++) matrix[i * size + j] += (di * (r[j] - mean[j])) / ((R - 1) * R * hartlap);
+    }
+  }
+}
 const bundleDir = join(out, 'bundle');
 writeMeasurementBundle(bundleDir, {
-  description: `mean B0, B2 of ${rows.length} second-order mocks (${n}^3, L = ${boxSize} Mpc/h, z = ${redshift}); covariance = diagonal sample covariance / ${rows.length}`,
+  description: `mean B0, B2 of ${rows.length} second-order mocks (${n}^3, L = ${boxSize} Mpc/h, z = ${redshift}); covariance = ${covarianceKind === 'diagonal' ? 'diagonal sample covariance / R' : 'full sample covariance / R / Hartlap factor'}, R = ${R}`,
   redshift,
   numberDensity: nbar,
   lineOfSight: 'z-axis',
@@ -171,7 +192,7 @@ console.log(
       triangleBins: nBins,
       dataPoints: size,
       truth: { ...truth, fsigma8: fsigma8True, sigma8: spectrum.sigma8 },
-      covariance: 'diagonal of the sample covariance / R',
+      covariance: covarianceKind === 'diagonal' ? 'diagonal of the sample covariance / R' : `full sample covariance / R / Hartlap factor ${hartlap}`,
       sampler: { walkers, maxSteps, workers },
       mockSeconds: times.mocks,
       fits,
