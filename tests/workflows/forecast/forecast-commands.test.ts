@@ -1,24 +1,15 @@
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { Command } from 'commander';
 import { afterAll, afterEach, describe, expect, it, vi } from 'vitest';
+import { runCliCaptured } from '../../support/run-cli-captured.js';
 import { registerForecast } from '../../../src/cli/commands/forecast.js';
 import { registerSensitivity } from '../../../src/cli/commands/sensitivity.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'treble-forecast-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-async function run(args: string[]): Promise<string> {
-  let out = '';
-  vi.spyOn(process.stdout, 'write').mockImplementation((s) => ((out += String(s)), true));
-  vi.spyOn(process.stderr, 'write').mockImplementation((s) => ((out += String(s)), true));
-  const program = new Command().exitOverride();
-  registerForecast(program);
-  registerSensitivity(program);
-  await program.parseAsync(['node', 'treble', ...args]);
-  return out;
-}
+const run = (args: string[]): Promise<string> => runCliCaptured([registerForecast, registerSensitivity], args);
 
 const config = {
   survey: { skyArea: 2000, bins: [{ zMin: 0.4, zMax: 0.6, nbar: 3e-4 }] },

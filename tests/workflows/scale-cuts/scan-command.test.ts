@@ -1,8 +1,8 @@
 import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { Command } from 'commander';
 import { afterAll, afterEach, describe, expect, it, vi } from 'vitest';
+import { runCliCaptured } from '../../support/run-cli-captured.js';
 import { registerScaleCutScan } from '../../../src/cli/commands/scale-cut-scan.js';
 import { writeMeasurementBundle } from '../../../src/data/write-measurement-bundle.js';
 import { PLANCK, scanFixture, TRUTH } from './scan-fixture.js';
@@ -10,15 +10,7 @@ import { PLANCK, scanFixture, TRUTH } from './scan-fixture.js';
 const dir = mkdtempSync(join(tmpdir(), 'treble-scan-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
 
-async function run(args: string[]): Promise<string> {
-  let out = '';
-  vi.spyOn(process.stdout, 'write').mockImplementation((s) => ((out += String(s)), true));
-  vi.spyOn(process.stderr, 'write').mockImplementation((s) => ((out += String(s)), true));
-  const program = new Command().exitOverride();
-  registerScaleCutScan(program);
-  await program.parseAsync(['node', 'treble', ...args]);
-  return out;
-}
+const run = (args: string[]): Promise<string> => runCliCaptured([registerScaleCutScan], args);
 
 describe('treble scan', () => {
   afterEach(() => {
