@@ -23,9 +23,9 @@ import { shellCentre, type TriangleBins } from '../src/bispectrum/triangle-bins.
 import { fundamentalFrequency } from '../src/numerics/lattice-shell.js';
 import { measureBox, planGeometry, planTriangleBins, type BoxMeasurementPlan } from '../src/mocks/box-measurement.js';
 import { gaussianFieldSpectrum } from '../src/mocks/gaussian-field.js';
-import { linearGalaxySpectrum } from '../src/mocks/linear-galaxy-field.js';
-import { dealiasSpectrum, secondOrderGalaxySpectrum } from '../src/mocks/second-order-field.js';
+import { secondOrderGalaxySpectrum } from '../src/mocks/second-order-field.js';
 import { addWhiteNoise } from '../src/mocks/stochastic-field.js';
+import { measureQuadraticPart } from './mocks-cubic-term.js';
 import { argValue, columnMoments, fiducialSpectrum } from './mocks-setup.js';
 
 const realisations = argValue('realisations', 50);
@@ -45,19 +45,12 @@ const plan: BoxMeasurementPlan = { mesh, power: { kMin: 2 * kf, kMax: 0.1, dk: 2
 const bins = planTriangleBins(plan) as TriangleBins;
 const geometry = planGeometry(plan);
 
-/** Z1 delta_L restricted like the linear input of the second-order field. */
-let cachedLinear: { from: Float64Array; value: Float64Array } | undefined;
-function linearPart(lin: Float64Array): Float64Array {
-  if (cachedLinear?.from !== lin) cachedLinear = { from: lin, value: dealiasSpectrum(linearGalaxySpectrum(lin, mesh, truth.b1, truth.f), n) };
-  return cachedLinear.value;
-}
-
 const t0 = Date.now();
 const rows: Float64Array[] = [];
 for (let r = 0; r < realisations; r++) {
   const lin = gaussianFieldSpectrum(mesh, (k) => spectrum.power(k), 7000 + r);
   const second = secondOrderGalaxySpectrum(lin, mesh, truth);
-  const quadratic = subtractCubic ? measureBox(second.map((v, i) => v - linearPart(lin)[i]), plan, geometry).bispectrum : undefined;
+  const quadratic = subtractCubic ? measureQuadraticPart(lin, second, truth, plan, geometry).bispectrum : undefined;
   const b = measureBox(addWhiteNoise(second, mesh, 1 / nbar, 90_000 + r), plan, geometry).bispectrum;
   if (!b) throw new Error('no bispectrum measured');
   const row = Float64Array.from([...b.b0, ...b.b2]);

@@ -21,7 +21,16 @@
  * resummation (the mocks' linear field has the raw linear power); no
  * velocity dispersion. No power spectrum in the bundle (P is kept out of the fit).
  *
+ * --subtract-cubic: in each realisation the bispectrum of the quadratic part
+ * alone, B[delta2, delta2, delta2] (one-loop in size, absent from the tree
+ * model; scripts/mocks-cubic-term.ts), is measured and subtracted from that
+ * realisation's B0, B2 before the mean and the covariance are formed, as in
+ * scripts/mocks-second-order.ts --subtract-cubic 1. The measured terms are
+ * kept in out/cubic.json; out/rows.json (the raw rows) is shared with a run
+ * without the option if copied over.
+ *
  *   npx tsx scripts/mocks-treble-fit.ts [--z 2] [--realisations 50] [--n 64] [--box 1000] [--kmax 0.1] [--covariance diagonal|full]
+ *       [--subtract-cubic]
  *       [--walkers 24] [--steps 1500] [--workers 2] [--out .treble-tmp/mocks-treble-fit]
  * Prints a JSON summary (recorded in docs/mocks-validation.md).
  */
@@ -33,6 +42,7 @@ import { bispectrumColumns, measureBox, planGeometry, type BoxMeasurementPlan } 
 import { gaussianFieldSpectrum } from '../src/mocks/gaussian-field.js';
 import { secondOrderGalaxySpectrum } from '../src/mocks/second-order-field.js';
 import { addWhiteNoise } from '../src/mocks/stochastic-field.js';
+import { measureQuadraticPart } from './mocks-cubic-term.js';
 import { argValue, columnMoments, fiducialSpectrum, FIDUCIAL } from './mocks-setup.js';
 
 const realisations = argValue('realisations', 50);
@@ -50,7 +60,9 @@ const textArg = (name: string, fallback: string) => {
 };
 const covarianceKind = textArg('covariance', 'diagonal');
 if (covarianceKind !== 'diagonal' && covarianceKind !== 'full') throw new Error(`--covariance must be diagonal or full, got ${covarianceKind}`);
-const out = resolve(textArg('out', '.treble-tmp/mocks-treble-fit'), `z${redshift}-R${realisations}-n${n}-${covarianceKind}`);
+const cubicFlag = process.argv.indexOf('--subtract-cubic');
+const subtractCubic = cubicFlag >= 0 && process.argv[cubicFlag + 1] !== '0';
+const out = resolve(textArg('out', '.treble-tmp/mocks-treble-fit'), `z${redshift}-R${realisations}-n${n}-${covarianceKind}${subtractCubic ? '-subcubic' : ''}`);
 
 const spectrum = fiducialSpectrum(redshift);
 const b1True = argValue('b1', 2);
@@ -65,28 +77,58 @@ mkdirSync(out, { recursive: true });
 const seconds = (t: number) => Math.round((Date.now() - t) / 100) / 10;
 const times: Record<string, number> = {};
 
-// 1. Realisations (same seeds as scripts/mocks-second-order.ts), kept in out/rows.json so a rerun skips them.
+// 1. Realisations (same seeds as scripts/mocks-second-order.ts), kept in out/rows.json so a rerun skips them;
+// with --subtract-cubic the measured B[delta2, delta2, delta2] of each realisation is kept in out/cubic.json.
 const rowsFile = join(out, 'rows.json');
+const cubicFile = join(out, 'cubic.json');
 let t = Date.now();
 let columns: ReturnType<typeof bispectrumColumns>;
-let rows: Float64Array[];
+let rows: Float64Array[] | undefined;
+let cubic: Float64Array[] | undefined;
+const toRow = (c: NonNullable<ReturnType<typeof bispectrumColumns>>) => Float64Array.from([...Array.from(c.values[0]), ...Array.from(c.values[1])]);
 if (existsSync(rowsFile)) {
   const saved = JSON.parse(readFileSync(rowsFile, 'utf8'));
   columns = saved.columns;
   rows = saved.rows.map((r: number[]) => Float64Array.from(r));
-} else {
+}
+if (subtractCubic && existsSync(cubicFile)) cubic = JSON.parse(readFileSync(cubicFile, 'utf8')).rows.map((r: number[]) => Float64Array.from(r));
+const needRows = rows === undefined;
+const needCubic = subtractCubic && cubic === undefined;
+if (needRows || needCubic) {
   const geometry = planGeometry(plan);
-  rows = [];
+  const newRows: Float64Array[] = [];
+  const newCubic: Float64Array[] = [];
   for (let r = 0; r < realisations; r++) {
     const lin = gaussianFieldSpectrum(mesh, (k) => spectrum.power(k), 7000 + r);
     const second = secondOrderGalaxySpectrum(lin, mesh, truth);
-    const m = measureBox(addWhiteNoise(second, mesh, 1 / nbar, 90_000 + r), plan, geometry);
-    columns = bispectrumColumns(m);
-    if (!columns) throw new Error('no bispectrum measured');
-    rows.push(Float64Array.from([...Array.from(columns.values[0]), ...Array.from(columns.values[1])]));
+    if (needCubic) {
+      const c = bispectrumColumns(measureQuadraticPart(lin, second, truth, plan, geometry));
+      if (!c) throw new Error('no bispectrum of the quadratic part measured');
+      newCubic.push(toRow(c));
+    }
+    if (needRows) {
+      columns = bispectrumColumns(measureBox(addWhiteNoise(second, mesh, 1 / nbar, 90_000 + r), plan, geometry));
+      if (!columns) throw new Error('no bispectrum measured');
+      newRows.push(toRow(columns));
+    }
     if (r % 10 === 9) process.stderr.write(`${r + 1} realisations, ${seconds(t)} s\n`);
   }
-  writeFileSync(rowsFile, JSON.stringify({ columns: { ...columns!, centres: Array.from(columns!.centres), effective: Array.from(columns!.effective), counts: Array.from(columns!.counts) }, rows: rows.map((r) => Array.from(r)) }));
+  if (needRows) {
+    rows = newRows;
+    writeFileSync(rowsFile, JSON.stringify({ columns: { ...columns!, centres: Array.from(columns!.centres), effective: Array.from(columns!.effective), counts: Array.from(columns!.counts) }, rows: rows.map((r) => Array.from(r)) }));
+  }
+  if (needCubic) {
+    cubic = newCubic;
+    writeFileSync(cubicFile, JSON.stringify({ about: 'B0, B2 of the quadratic part delta2 of each realisation (same bins as rows.json)', rows: cubic.map((r) => Array.from(r)) }));
+  }
+}
+if (!rows) throw new Error('no realisations');
+if (rows.length !== realisations) throw new Error(`${rowsFile} holds ${rows.length} realisations, asked for ${realisations}`);
+let meanCubic: Float64Array | undefined;
+if (subtractCubic) {
+  if (!cubic || cubic.length !== rows.length || cubic[0].length !== rows[0].length) throw new Error(`${cubicFile} does not match ${rowsFile}`);
+  meanCubic = columnMoments(cubic).mean;
+  rows = rows.map((row, r) => row.map((v, i) => v - cubic![r][i]));
 }
 times.mocks = seconds(t);
 if (!columns) throw new Error('no bispectrum columns');
@@ -112,7 +154,7 @@ if (covarianceKind === 'diagonal') {
 }
 const bundleDir = join(out, 'bundle');
 writeMeasurementBundle(bundleDir, {
-  description: `mean B0, B2 of ${rows.length} second-order mocks (${n}^3, L = ${boxSize} Mpc/h, z = ${redshift}); covariance = ${covarianceKind === 'diagonal' ? 'diagonal sample covariance / R' : 'full sample covariance / R / Hartlap factor'}, R = ${R}`,
+  description: `mean B0, B2 of ${rows.length} second-order mocks (${n}^3, L = ${boxSize} Mpc/h, z = ${redshift})${subtractCubic ? ', measured B[delta2, delta2, delta2] subtracted per realisation' : ''}; covariance = ${covarianceKind === 'diagonal' ? 'diagonal sample covariance / R' : 'full sample covariance / R / Hartlap factor'}, R = ${R}`,
   redshift,
   numberDensity: nbar,
   lineOfSight: 'z-axis',
@@ -127,7 +169,7 @@ writeFileSync(join(out, 'truth.json'), `${JSON.stringify({ parameters: { ...trut
 const uniform = (min: number, max: number, start: number) => ({ prior: { kind: 'uniform', min, max }, start });
 function runConfig(name: string, freeF: boolean): string {
   const config = {
-    title: `second-order mocks, z = ${redshift}, B0 + B2, ${freeF ? 'b1, b2, bG2, fsigma8' : 'b1, b2, bG2 (f fixed)'}`,
+    title: `second-order mocks, z = ${redshift}, B0 + B2${subtractCubic ? ' minus B[d2, d2, d2]' : ''}, ${freeF ? 'b1, b2, bG2, fsigma8' : 'b1, b2, bG2 (f fixed)'}`,
     measurement: 'bundle',
     covariance: { source: 'matrix' },
     cosmology: { mode: 'fixed-template', template: FIDUCIAL },
@@ -151,6 +193,13 @@ function runConfig(name: string, freeF: boolean): string {
   const file = join(out, `${name}.json`);
   writeFileSync(file, `${JSON.stringify(config, null, 2)}\n`);
   return file;
+}
+
+/** Largest |mean cubic term| / |mean of the subtracted data| over the bins [from, to). */
+function maxRatio(c: Float64Array, from: number, to: number): number {
+  let m = 0;
+  for (let i = from; i < to; i++) m = Math.max(m, Math.abs(c[i] / mean[i]));
+  return m;
 }
 
 const names = ['b1', 'b2', 'bG2', 'fsigma8', 'f'] as const;
@@ -192,6 +241,8 @@ console.log(
       triangleBins: nBins,
       dataPoints: size,
       truth: { ...truth, fsigma8: fsigma8True, sigma8: spectrum.sigma8 },
+      subtractCubic,
+      meanCubicOverMeanData: meanCubic ? { B0: maxRatio(meanCubic, 0, nBins), B2: maxRatio(meanCubic, nBins, 2 * nBins) } : undefined,
       covariance: covarianceKind === 'diagonal' ? 'diagonal of the sample covariance / R' : `full sample covariance / R / Hartlap factor ${hartlap}`,
       sampler: { walkers, maxSteps, workers },
       mockSeconds: times.mocks,
