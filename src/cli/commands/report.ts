@@ -1,14 +1,11 @@
-import { existsSync } from 'node:fs';
-import { join } from 'node:path';
 import type { Command } from 'commander';
-import { InputError } from '../../contracts/input-error.js';
 import { writeFitReport } from '../../workflows/fit/fit-report.js';
 import { readRunConfig } from '../../workflows/fit/run-config.js';
 import { finishFit } from '../../workflows/fit/run-fit.js';
 import { countOption } from '../cli-options.js';
 import { action } from '../run-command.js';
 
-/** `treble report <config>`: summary and report of a finished (or interrupted) sampling run. */
+/** `treble report <config>`: summary and report of a finished (or interrupted) sampling run; a missing run is refused by loadFinishedRun. */
 export function registerReport(program: Command): void {
   program
     .command('report')
@@ -18,7 +15,6 @@ export function registerReport(program: Command): void {
     .action(
       action(async (file: string, opts: { workers?: string }) => {
         const config = readRunConfig(file);
-        if (!existsSync(join(config.output, 'chain.json'))) throw new InputError(`${config.output}: no sampling run in the config's output folder`, { hint: `run \`treble fit ${file}\` first` });
         const summary = await finishFit(config, undefined, { workers: opts.workers === undefined ? undefined : countOption('workers', opts.workers) });
         process.stdout.write(summary.table);
         process.stdout.write(`report: ${writeFitReport(config, summary)}\n`);

@@ -1,4 +1,4 @@
-import { existsSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { InterruptedError } from '../../contracts/interrupted-error.js';
 import { join } from 'node:path';
 import { createJointLikelihood } from '../../inference/likelihood/joint-likelihood-options.js';
@@ -110,8 +110,4 @@ export async function finishFit(
   writeFileSync(join(config.output, 'summary.txt'), summary.table);
   options.log?.(`summary: ${join(config.output, 'summary.json')}`);
   return summary;
-}
-
-export function hasFinishedRun(folder: string): boolean {
-  return existsSync(join(folder, `${CHAIN_STEM}.json`));
 }
