@@ -22,8 +22,9 @@ export class TabulatedSpectrum implements LinearSpectrum {
   readonly sigma2BAO: number;
   readonly deltaSigma2BAO: number;
   readonly sigma8: number;
-  private readonly noWiggle: CubicSpline;
-  private readonly wiggle: CubicSpline;
+  /** The splines of P_nw and P_w (one grid), for SplineStencil lookups. */
+  readonly noWiggle: CubicSpline;
+  readonly wiggle: CubicSpline;
   private readonly source: LinearSpectrum;
 
   constructor(source: LinearSpectrum, kLo: number, kHi: number, points = 2000) {

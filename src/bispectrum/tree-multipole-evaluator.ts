@@ -1,6 +1,8 @@
 import { kernelF2, kernelG2, kernelGalileonTidal } from '../perturbation/kernels.js';
 import { averageOverTriangleNodes } from './orientation-average.js';
 import { multipoleWeights, type OrientationRule } from './orientation-rule.js';
+import { expNegative } from '../numerics/fast-exp.js';
+import { NodeSidePowers } from './node-side-powers.js';
 import { TabulatedSpectrum } from './tabulated-spectrum.js';
 import type { TriangleNodeSet } from './triangle-node-set.js';
 import { TreeDirectIntegrand } from './tree-direct-integrand.js';
@@ -12,15 +14,20 @@ import { checkWavenumbersInTable, resolveTreeSettings, type ResolvedTreeSettings
 /**
  * Full evaluation of B_l — or of the averaged templates — on a fixed geometry
  * (bin nodes, orientation rule, multipoles) for a new linear spectrum: the
- * averages of TreeDirectIntegrand and TreeTemplateIntegrand made fast. Geometry that does not depend on cosmology (cosines between the sides,
- * F2, G2 and sigma^2 of each pair at each node, Legendre weights) is built once
- * in the constructor. Per evaluation the spectrum is re-tabulated
- * (TabulatedSpectrum) and, without AP distortion, P_nw and the damped-at-mu=0
- * wiggle of each side are looked up once per node; the orientation loop only
- * adds the mu-dependent part of the BAO damping,
- *   exp(-k^2 Sigma_tot^2(mu)) = exp(-k^2 Sigma^2) exp(-k^2 mu^2 [a + c mu^2]),
+ * averages of TreeDirectIntegrand and TreeTemplateIntegrand made fast.
+ * Geometry that does not depend on cosmology (cosines between the sides, F2, G2
+ * and sigma^2 of each pair at each node, Legendre weights per mu node, the
+ * spline stencil of the side wavenumbers) is built once. Per evaluation the
+ * spectrum is re-tabulated (TabulatedSpectrum) and, without AP distortion,
+ * P_nw and the damped-at-mu=0 wiggle of each side are looked up once per node
+ * (NodeSidePowers); the orientation loop works with the line-of-sight
+ * components u_i = k_i mu_i (u1 + u2 + u3 = 0) and only adds the mu-dependent
+ * part of the BAO damping,
+ *   exp(-k^2 Sigma_tot^2(mu)) = exp(-k^2 Sigma^2) exp(-u^2 [a + c mu^2]),
  *   a = f (2 + f) Sigma^2 - f^2 delta Sigma^2, c = f^2 delta Sigma^2
  * (ir-resummed-power.ts), the kernels' mu terms and the fingers-of-god factor.
+ * The rule is a product rule (orientation-rule.ts): the Legendre weight is
+ * applied once per mu node to the sum over phi.
  * With AP distortion the wavenumbers change with orientation and it falls back
  * to the generic average of TreeDirectIntegrand on the tabulated spectrum.
  * Output layouts: B_l [multipole][bin] as combineTreeTemplates; templates
@@ -30,7 +37,12 @@ export class TreeMultipoleEvaluator {
   readonly nodes: TriangleNodeSet;
   readonly multipoles: readonly number[];
   readonly rule: OrientationRule;
-  private readonly weights: Float64Array;
+  /** Per mu node: mu1, and weight (2l+1) L_l(mu1) of one phi point, [mu node][multipole]. */
+  private readonly mu: Float64Array;
+  private readonly muWeights: Float64Array;
+  /** Per orientation point: sqrt(1 - mu1^2) cos(phi), so that u2 = k2 (mu1 cos12 - sin12 this). */
+  private readonly lineOfSightSide2: Float64Array;
+  private readonly sidePowers: NodeSidePowers;
   /** Per node: cos and sin of the angle between sides 1 and 2. */
   private readonly cos12: Float64Array;
   private readonly sin12: Float64Array;
@@ -43,7 +55,16 @@ export class TreeMultipoleEvaluator {
     this.nodes = nodes;
     this.multipoles = multipoles;
     this.rule = rule;
-    this.weights = multipoleWeights(rule, multipoles);
+    const weights = multipoleWeights(rule, multipoles);
+    const nm = multipoles.length;
+    this.mu = new Float64Array(rule.muCount);
+    this.muWeights = new Float64Array(rule.muCount * nm);
+    for (let j = 0; j < rule.muCount; j++) {
+      this.mu[j] = rule.mu1[j * rule.phiCount];
+      for (let m = 0; m < nm; m++) this.muWeights[j * nm + m] = weights[j * rule.phiCount * nm + m];
+    }
+    this.lineOfSightSide2 = rule.sinMu1.map((s, o) => s * rule.cosPhi[o]);
+    this.sidePowers = new NodeSidePowers(nodes);
     const n = nodes.k1.length;
     this.cos12 = new Float64Array(n);
     this.sin12 = new Float64Array(n);
@@ -102,97 +123,89 @@ export class TreeMultipoleEvaluator {
     return { ...s0, spectrum: new TabulatedSpectrum(s0.spectrum, this.kLo / aMax, this.kHi / aMin) };
   }
 
-  /** Per node: P_nw and the wiggle damped by exp(-k^2 Sigma^2) of the three sides, into sides[0..5]. */
-  private sidePowers(s: ResolvedTreeSettings, i: number, sides: Float64Array): void {
-    sidePower(s, this.nodes.k1[i], 0, sides);
-    sidePower(s, this.nodes.k2[i], 1, sides);
-    sidePower(s, this.nodes.k3[i], 2, sides);
-  }
-
   private undistortedTemplates(s: ResolvedTreeSettings): Float64Array {
     const { k1: K1, k2: K2, k3: K3, weight, start, binCount } = this.nodes;
     const nm = this.multipoles.length;
     const T = TREE_TEMPLATE_SIZE;
     const out = new Float64Array(binCount * nm * T);
-    const { mu1: M1, sinMu1, cosPhi } = this.rule;
-    const nOrient = M1.length;
-    const wl = this.weights;
-    const fd = s.fForBaoDamping;
-    const ir = s.irResummation;
-    const aIR = fd * (2 + fd) * s.spectrum.sigma2BAO - fd * fd * s.spectrum.deltaSigma2BAO;
-    const cIR = fd * fd * s.spectrum.deltaSigma2BAO;
+    const { muCount, phiCount } = this.rule;
+    const { mu: MU, lineOfSightSide2: SC, muWeights: WMU } = this;
+    const { aIR, cIR } = this.dampingCoefficients(s);
     const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
     const n1 = s.inverseDensity;
-    const sides = new Float64Array(6);
+    const { noWiggle: NW, wiggle: WG } = this.sidePowers.fill(s);
     const v = new Float64Array(T);
+    const perMu = new Float64Array(T);
     const acc = new Float64Array(nm * T);
     const pk = this.pairKernels;
     for (let bin = 0; bin < binCount; bin++) {
-      const base = bin * nm * T;
       acc.fill(0);
       for (let i = start[bin]; i < start[bin + 1]; i++) {
         const k1 = K1[i];
         const k2 = K2[i];
         const k3 = K3[i];
-        const c12 = this.cos12[i];
-        const s12 = this.sin12[i];
-        const o9 = 9 * i;
-        this.sidePowers(s, i, sides);
-        const wn = weight[i];
         const i1 = 1 / k1;
         const i2 = 1 / k2;
         const i3 = 1 / k3;
-        for (let o = 0; o < nOrient; o++) {
-          const m1 = M1[o];
-          const m2 = m1 * c12 - sinMu1[o] * s12 * cosPhi[o];
-          const m3 = -(k1 * m1 + k2 * m2) * i3;
+        const a2 = k2 * this.cos12[i];
+        const b2 = k2 * this.sin12[i];
+        const o9 = 9 * i;
+        const wn = weight[i];
+        for (let j = 0; j < muCount; j++) {
+          const m1 = MU[j];
+          const u1 = k1 * m1;
           const q1 = m1 * m1;
-          const q2 = m2 * m2;
-          const q3 = m3 * m3;
-          const P1 = ir ? sides[0] + sides[3] * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : sides[0] + sides[3];
-          const P2 = ir ? sides[1] + sides[4] * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : sides[1] + sides[4];
-          const P3 = ir ? sides[2] + sides[5] * Math.exp(-k3 * k3 * q3 * (aIR + cIR * q3)) : sides[2] + sides[5];
-          const damp = halfSv2 > 0 ? Math.exp(-halfSv2 * (k1 * k1 * q1 + k2 * k2 * q2 + k3 * k3 * q3)) : 1;
-          for (let t = 0; t < 14; t++) v[t] = 0;
-          addPairTemplates(v, 0, 2 * damp * P1 * P2, -m3 * k3, i1, i2, m1, m2, m3, pk[o9], pk[o9 + 1], pk[o9 + 2]);
-          addPairTemplates(v, 0, 2 * damp * P2 * P3, -m1 * k1, i2, i3, m2, m3, m1, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5]);
-          addPairTemplates(v, 0, 2 * damp * P3 * P1, -m2 * k2, i3, i1, m3, m1, m2, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8]);
-          v[14] = n1 * (P1 + P2 + P3);
-          v[15] = n1 * (q1 * P1 + q2 * P2 + q3 * P3);
-          v[16] = n1 * n1;
+          const P1 = NW[3 * i] + WG[3 * i] * expNegative(u1 * u1 * (aIR + cIR * q1));
+          perMu.fill(0);
+          for (let p = 0; p < phiCount; p++) {
+            // LOS components u_i = k_i mu_i of the three sides; u1 + u2 + u3 = 0.
+            const u2 = a2 * m1 - b2 * SC[j * phiCount + p];
+            const u3 = -u1 - u2;
+            const m2 = u2 * i2;
+            const m3 = u3 * i3;
+            const q2 = m2 * m2;
+            const q3 = m3 * m3;
+            const P2 = NW[3 * i + 1] + WG[3 * i + 1] * expNegative(u2 * u2 * (aIR + cIR * q2));
+            const P3 = NW[3 * i + 2] + WG[3 * i + 2] * expNegative(u3 * u3 * (aIR + cIR * q3));
+            const damp = halfSv2 > 0 ? expNegative(halfSv2 * (u1 * u1 + u2 * u2 + u3 * u3)) : 1;
+            for (let t = 0; t < 14; t++) v[t] = 0;
+            addPairTemplates(v, 0, 2 * damp * P1 * P2, -u3, i1, i2, m1, m2, m3, pk[o9], pk[o9 + 1], pk[o9 + 2]);
+            addPairTemplates(v, 0, 2 * damp * P2 * P3, -u1, i2, i3, m2, m3, m1, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5]);
+            addPairTemplates(v, 0, 2 * damp * P3 * P1, -u2, i3, i1, m3, m1, m2, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8]);
+            v[14] = n1 * (P1 + P2 + P3);
+            v[15] = n1 * (q1 * P1 + q2 * P2 + q3 * P3);
+            v[16] = n1 * n1;
+            for (let t = 0; t < T; t++) perMu[t] += v[t];
+          }
           for (let m = 0; m < nm; m++) {
-            const w = wn * wl[o * nm + m];
+            const w = wn * WMU[j * nm + m];
             const row = m * T;
-            for (let t = 0; t < T; t++) acc[row + t] += w * v[t];
+            for (let t = 0; t < T; t++) acc[row + t] += w * perMu[t];
           }
         }
       }
-      for (let r = 0; r < nm * T; r++) out[base + r] = acc[r];
+      out.set(acc, bin * nm * T);
     }
     return out;
   }
 
   private undistorted(s: ResolvedTreeSettings, p: TreeBispectrumParameters): Float64Array {
-    const ir = s.irResummation;
-    const fd = s.fForBaoDamping;
-    const sigmaV = s.velocityDispersion;
-    const n1 = s.inverseDensity;
-    const sides = new Float64Array(6);
     const { k1: K1, k2: K2, k3: K3, weight, start, binCount } = this.nodes;
     const nm = this.multipoles.length;
     const out = new Float64Array(binCount * nm);
-    const { mu1: M1, sinMu1, cosPhi } = this.rule;
-    const nOrient = M1.length;
-    const nPhi = this.rule.phiCount;
-    const wl = this.weights;
+    const { muCount, phiCount } = this.rule;
+    const { mu: MU, lineOfSightSide2: SC, muWeights: WMU } = this;
+    const { aIR, cIR } = this.dampingCoefficients(s);
+    const fog = s.velocityDispersion > 0;
+    const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
+    const n1 = s.inverseDensity;
     const { b1, b2, bG2, f } = p;
-    const sig2 = s.spectrum.sigma2BAO;
-    const dsig2 = s.spectrum.deltaSigma2BAO;
-    const aIR = fd * (2 + fd) * sig2 - fd * fd * dsig2;
-    const cIR = fd * fd * dsig2;
-    const halfSv2 = 0.5 * sigmaV * sigmaV;
-    const stochConst = p.bispShotConst * n1 * n1;
+    const hb2 = 0.5 * b2;
+    const hf = 0.5 * f;
+    const stochConst = phiCount * p.bispShotConst * n1 * n1;
     const stochP = p.bispShotPower * n1 * b1;
+    const { noWiggle: NW, wiggle: WG } = this.sidePowers.fill(s);
+    const pk = this.pairKernels;
     const acc = new Float64Array(nm);
     for (let bin = 0; bin < binCount; bin++) {
       acc.fill(0);
@@ -200,85 +213,73 @@ export class TreeMultipoleEvaluator {
         const k1 = K1[i];
         const k2 = K2[i];
         const k3 = K3[i];
-        const c12 = this.cos12[i];
-        const s12 = this.sin12[i];
-        const pk = this.pairKernels;
+        const ik1 = 1 / (k1 * k1);
+        const ik2 = 1 / (k2 * k2);
+        const ik3 = 1 / (k3 * k3);
+        const a2 = k2 * this.cos12[i];
+        const bs2 = k2 * this.sin12[i];
         const o9 = 9 * i;
-        this.sidePowers(s, i, sides);
-        const n1k = sides[0];
-        const n2k = sides[1];
-        const n3k = sides[2];
-        const w1k = sides[3];
-        const w2k = sides[4];
-        const w3k = sides[5];
+        // Orientation-independent parts of Z2 per pair: b1 F2 + b2/2 + bG2 sigma^2, and f G2.
+        const c12 = b1 * pk[o9] + hb2 + bG2 * pk[o9 + 2];
+        const c23 = b1 * pk[o9 + 3] + hb2 + bG2 * pk[o9 + 5];
+        const c31 = b1 * pk[o9 + 6] + hb2 + bG2 * pk[o9 + 8];
+        const g12 = f * pk[o9 + 1];
+        const g23 = f * pk[o9 + 4];
+        const g31 = f * pk[o9 + 7];
+        const nw1 = NW[3 * i];
+        const nw2 = NW[3 * i + 1];
+        const nw3 = NW[3 * i + 2];
+        const w1 = WG[3 * i];
+        const w2 = WG[3 * i + 1];
+        const w3 = WG[3 * i + 2];
         const wn = weight[i];
-        const i1 = 1 / k1;
-        const i2 = 1 / k2;
-        const i3 = 1 / k3;
-        // Orientation points are mu-major: side 1's damping factors change only with the mu node.
-        let P1 = 0;
-        let d1 = 0;
-        let nextMu = 0;
-        for (let o = 0; o < nOrient; o++) {
-          const m1 = M1[o];
+        for (let j = 0; j < muCount; j++) {
+          const m1 = MU[j];
+          const u1 = k1 * m1;
+          const uu1 = u1 * u1;
           const q1 = m1 * m1;
-          if (o === nextMu) {
-            P1 = ir ? n1k + w1k * Math.exp(-k1 * k1 * q1 * (aIR + cIR * q1)) : n1k + w1k;
-            d1 = -halfSv2 * k1 * k1 * q1;
-            nextMu += nPhi;
-          }
-          const m2 = m1 * c12 - sinMu1[o] * s12 * cosPhi[o];
-          const m3 = -(k1 * m1 + k2 * m2) * i3;
-          const q2 = m2 * m2;
-          const q3 = m3 * m3;
-          const P2 = ir ? n2k + w2k * Math.exp(-k2 * k2 * q2 * (aIR + cIR * q2)) : n2k + w2k;
-          const P3 = ir ? n3k + w3k * Math.exp(-k3 * k3 * q3 * (aIR + cIR * q3)) : n3k + w3k;
           const z1 = b1 + f * q1;
-          const z2 = b1 + f * q2;
-          const z3 = b1 + f * q3;
-          // Z2 of each pair (Scoccimarro, Couchman & Frieman 1999, eq. 13); the sum vector of pair (a, b) is -k_c.
-          const zz12 = pairZ2(b1, b2, bG2, f, pk[o9], pk[o9 + 1], pk[o9 + 2], k1, k2, i1, i2, m1, m2, q1, q2, q3);
-          const zz23 = pairZ2(b1, b2, bG2, f, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5], k2, k3, i2, i3, m2, m3, q2, q3, q1);
-          const zz31 = pairZ2(b1, b2, bG2, f, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8], k3, k1, i3, i1, m3, m1, q3, q1, q2);
-          let b = 2 * (z1 * z2 * zz12 * P1 * P2 + z2 * z3 * zz23 * P2 * P3 + z3 * z1 * zz31 * P3 * P1);
-          if (sigmaV > 0) b *= Math.exp(d1 - halfSv2 * (k2 * k2 * q2 + k3 * k3 * q3));
-          b += stochP * (z1 * P1 + z2 * P2 + z3 * P3) + stochConst;
-          for (let m = 0; m < nm; m++) acc[m] += wn * wl[o * nm + m] * b;
+          const v1 = u1 * ik1;
+          const P1 = nw1 + w1 * expNegative(uu1 * (aIR + cIR * q1));
+          const zP1 = z1 * P1;
+          const A2 = a2 * m1;
+          let sum = stochConst;
+          for (let ph = 0; ph < phiCount; ph++) {
+            // LOS components u_i = k_i mu_i of the three sides; u1 + u2 + u3 = 0.
+            const u2 = A2 - bs2 * SC[j * phiCount + ph];
+            const u3 = -u1 - u2;
+            const uu2 = u2 * u2;
+            const uu3 = u3 * u3;
+            const q2 = uu2 * ik2;
+            const q3 = uu3 * ik3;
+            const z2 = b1 + f * q2;
+            const z3 = b1 + f * q3;
+            const v2 = u2 * ik2;
+            const v3 = u3 * ik3;
+            const zP2 = z2 * (nw2 + w2 * expNegative(uu2 * (aIR + cIR * q2)));
+            const zP3 = z3 * (nw3 + w3 * expNegative(uu3 * (aIR + cIR * q3)));
+            // Z2 of each pair (Scoccimarro, Couchman & Frieman 1999, eq. 13): the pair (a, b) sums to -k_c,
+            // so mu k = u_a + u_b = -u_c and the velocity term is -(f/2) u_c (mu_a/k_a Z1_b + mu_b/k_b Z1_a).
+            const zz12 = c12 + g12 * q3 - hf * u3 * (v1 * z2 + v2 * z1);
+            const zz23 = c23 + g23 * q1 - hf * u1 * (v2 * z3 + v3 * z2);
+            const zz31 = c31 + g31 * q2 - hf * u2 * (v3 * z1 + v1 * z3);
+            let b = 2 * (zP1 * zP2 * zz12 + zP2 * zP3 * zz23 + zP3 * zP1 * zz31);
+            if (fog) b *= expNegative(halfSv2 * (uu1 + uu2 + uu3));
+            sum += b + stochP * (zP1 + zP2 + zP3);
+          }
+          for (let m = 0; m < nm; m++) acc[m] += wn * WMU[j * nm + m] * sum;
         }
       }
       for (let m = 0; m < nm; m++) out[m * binCount + bin] = acc[m];
     }
     return out;
   }
-}
 
-/** Z2(k_a, k_b) from precomputed F2, G2, sigma^2, 1/k_a, 1/k_b and the cosines (mu^2 of the sum vector = mu_c^2). */
-function pairZ2(
-  b1: number,
-  b2: number,
-  bG2: number,
-  f: number,
-  F: number,
-  G: number,
-  S: number,
-  ka: number,
-  kb: number,
-  invKa: number,
-  invKb: number,
-  ma: number,
-  mb: number,
-  qa: number,
-  qb: number,
-  qc: number,
-): number {
-  const muK = ma * ka + mb * kb;
-  return b1 * F + f * qc * G + 0.5 * f * muK * (ma * invKa * (b1 + f * qb) + mb * invKb * (b1 + f * qa)) + 0.5 * b2 + bG2 * S;
-}
-
-/** P_nw(k) into sides[j] and P_w(k), damped by exp(-k^2 Sigma^2) when IR-resummed, into sides[3 + j]. */
-function sidePower(s: ResolvedTreeSettings, k: number, j: number, sides: Float64Array): void {
-  const nw = s.spectrum.powerNoWiggle(k);
-  const w = s.spectrum.power(k) - nw;
-  sides[j] = nw;
-  sides[3 + j] = s.irResummation ? w * Math.exp(-k * k * s.spectrum.sigma2BAO) : w;
+  /** Coefficients of the mu-dependent BAO damping exp(-u^2 [a + c mu^2]), u = k mu; zero without IR resummation. */
+  private dampingCoefficients(s: ResolvedTreeSettings): { aIR: number; cIR: number } {
+    if (!s.irResummation) return { aIR: 0, cIR: 0 };
+    const fd = s.fForBaoDamping;
+    const dsig2 = s.spectrum.deltaSigma2BAO;
+    return { aIR: fd * (2 + fd) * s.spectrum.sigma2BAO - fd * fd * dsig2, cIR: fd * fd * dsig2 };
+  }
 }

@@ -44,7 +44,14 @@ describe('fast templates (TreeMultipoleEvaluator.templates)', () => {
     const fast = new TreeMultipoleEvaluator(nodes, [0, 2], rule).templates(settings, false);
     const generic = averageOverTriangleNodes(nodes, new TreeTemplateIntegrand(settings), [0, 2], rule);
     expect(fast.length).toBe(generic.length);
-    for (let i = 0; i < fast.length; i++) expect(Math.abs(fast[i] - generic[i])).toBeLessThanOrEqual(1e-12 * Math.abs(generic[i]) + 1e-300);
+    // Relative to the largest template of the same bin and multipole: some entries are exactly zero
+    // (the l = 2 moment of the constant 1/nbar^2 term) and are rounding noise in both sums.
+    const T = 17;
+    for (let i = 0; i < fast.length; i++) {
+      const row = generic.subarray(i - (i % T), i - (i % T) + T);
+      const scale = Math.max(...Array.from(row, Math.abs));
+      expect(Math.abs(fast[i] - generic[i])).toBeLessThanOrEqual(1e-12 * scale);
+    }
   });
 });
 
