@@ -1,13 +1,12 @@
 import { kernelF2, kernelG2, kernelGalileonTidal } from '../perturbation/kernels.js';
-import { averageOverTriangleNodes } from './orientation-average.js';
 import { multipoleWeights, type OrientationRule } from './orientation-rule.js';
 import { expNegative } from '../numerics/fast-exp.js';
 import { NodeSidePowers } from './node-side-powers.js';
 import { TabulatedSpectrum } from './tabulated-spectrum.js';
 import type { TriangleNodeSet } from './triangle-node-set.js';
-import { TreeDirectIntegrand } from './tree-direct-integrand.js';
 import type { TreeBispectrumParameters } from './tree-template-terms.js';
-import { addPairTemplates, TreeTemplateIntegrand } from './tree-template-integrand.js';
+import { distortedMultipoles, distortedTemplates, type OrientationGeometry } from './tree-multipole-distorted.js';
+import { addPairTemplates } from './tree-template-integrand.js';
 import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
 import { checkWavenumbersInTable, resolveTreeSettings, type ResolvedTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
 
@@ -28,24 +27,27 @@ import { checkWavenumbersInTable, resolveTreeSettings, type ResolvedTreeSettings
  * (ir-resummed-power.ts), the kernels' mu terms and the fingers-of-god factor.
  * The rule is a product rule (orientation-rule.ts): the Legendre weight is
  * applied once per mu node to the sum over phi.
- * With AP distortion the wavenumbers change with orientation and it falls back
- * to the generic average of TreeDirectIntegrand on the tabulated spectrum.
+ * With AP distortion the true wavenumbers change with orientation and the loops
+ * of tree-multipole-distorted.ts look the spectrum up per orientation point.
  * Output layouts: B_l [multipole][bin] as combineTreeTemplates; templates
  * [bin][multipole][value] as the averagers.
  */
-export class TreeMultipoleEvaluator {
+export class TreeMultipoleEvaluator implements OrientationGeometry {
   readonly nodes: TriangleNodeSet;
   readonly multipoles: readonly number[];
   readonly rule: OrientationRule;
+  readonly multipoleCount: number;
+  readonly muCount: number;
+  readonly phiCount: number;
   /** Per mu node: mu1, and weight (2l+1) L_l(mu1) of one phi point, [mu node][multipole]. */
-  private readonly mu: Float64Array;
-  private readonly muWeights: Float64Array;
+  readonly mu: Float64Array;
+  readonly muWeights: Float64Array;
   /** Per orientation point: sqrt(1 - mu1^2) cos(phi), so that u2 = k2 (mu1 cos12 - sin12 this). */
-  private readonly lineOfSightSide2: Float64Array;
-  private readonly sidePowers: NodeSidePowers;
+  readonly lineOfSightSide2: Float64Array;
   /** Per node: cos and sin of the angle between sides 1 and 2. */
-  private readonly cos12: Float64Array;
-  private readonly sin12: Float64Array;
+  readonly cos12: Float64Array;
+  readonly sin12: Float64Array;
+  private readonly sidePowers: NodeSidePowers;
   /** Per node, pairs (12, 23, 31): F2, G2, sigma^2 — 9 values. */
   private readonly pairKernels: Float64Array;
   private readonly kLo: number;
@@ -57,6 +59,9 @@ export class TreeMultipoleEvaluator {
     this.rule = rule;
     const weights = multipoleWeights(rule, multipoles);
     const nm = multipoles.length;
+    this.multipoleCount = nm;
+    this.muCount = rule.muCount;
+    this.phiCount = rule.phiCount;
     this.mu = new Float64Array(rule.muCount);
     this.muWeights = new Float64Array(rule.muCount * nm);
     for (let j = 0; j < rule.muCount; j++) {
@@ -96,21 +101,14 @@ export class TreeMultipoleEvaluator {
   /** B_l, layout [multipole][bin]; `tabulate` false uses the spectrum as given. */
   evaluate(settings: TreeBispectrumSettings | ResolvedTreeSettings, params: TreeBispectrumParameters, tabulate = true): Float64Array {
     const s = this.prepare(settings, tabulate);
-    const nb = this.nodes.binCount;
-    const nm = this.multipoles.length;
-    if (s.alphaPar !== 1 || s.alphaPerp !== 1) {
-      const avg = averageOverTriangleNodes(this.nodes, new TreeDirectIntegrand(s, params), this.multipoles, this.rule);
-      const out = new Float64Array(nb * nm);
-      for (let b = 0; b < nb; b++) for (let m = 0; m < nm; m++) out[m * nb + b] = avg[b * nm + m];
-      return out;
-    }
+    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return distortedMultipoles(this, s, params);
     return this.undistorted(s, params);
   }
 
   /** Averaged templates [bin][multipole][value] (tree-template-terms.ts), as averaging TreeTemplateIntegrand. */
   templates(settings: TreeBispectrumSettings | ResolvedTreeSettings, tabulate = true): Float64Array {
     const s = this.prepare(settings, tabulate);
-    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return averageOverTriangleNodes(this.nodes, new TreeTemplateIntegrand(s), this.multipoles, this.rule);
+    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return distortedTemplates(this, s);
     return this.undistortedTemplates(s);
   }
 

@@ -3,6 +3,7 @@ import { continuousBinNodes } from '../../src/bispectrum/continuous-bin-nodes.js
 import { averageOverTriangleNodes } from '../../src/bispectrum/orientation-average.js';
 import { orientationRule } from '../../src/bispectrum/orientation-rule.js';
 import { TreeTemplateIntegrand } from '../../src/bispectrum/tree-template-integrand.js';
+import { TreeDirectIntegrand } from '../../src/bispectrum/tree-direct-integrand.js';
 import { TabulatedSpectrum } from '../../src/bispectrum/tabulated-spectrum.js';
 import { TreeBispectrumModel } from '../../src/bispectrum/tree-bispectrum-model.js';
 import { TreeMultipoleEvaluator } from '../../src/bispectrum/tree-multipole-evaluator.js';
@@ -36,11 +37,13 @@ describe('fast full evaluation (TreeMultipoleEvaluator)', () => {
 });
 
 describe('fast templates (TreeMultipoleEvaluator.templates)', () => {
-  it('equal the generic average of TreeTemplateIntegrand to 1e-12, with damping, IR and stochastic terms', () => {
+  const apCases: Record<string, number>[] = [{}, { alphaPar: 1.04, alphaPerp: 0.97 }, { alphaPar: 0.95, alphaPerp: 0.95 }];
+  for (const ap of apCases) {
+  it(`equal the generic average of TreeTemplateIntegrand to 1e-12, with damping, IR and stochastic terms (${JSON.stringify(ap)})`, () => {
     const bins = enumerateTriangleBins(shellGrid(0.02, 0.08, 0.02));
     const nodes = continuousBinNodes(bins, 3);
     const rule = orientationRule(4, 6);
-    const settings = { spectrum, numberDensity: 2e-4, velocityDispersion: 3 };
+    const settings = { spectrum, numberDensity: 2e-4, velocityDispersion: 3, ...ap };
     const fast = new TreeMultipoleEvaluator(nodes, [0, 2], rule).templates(settings, false);
     const generic = averageOverTriangleNodes(nodes, new TreeTemplateIntegrand(settings), [0, 2], rule);
     expect(fast.length).toBe(generic.length);
@@ -51,6 +54,22 @@ describe('fast templates (TreeMultipoleEvaluator.templates)', () => {
       const row = generic.subarray(i - (i % T), i - (i % T) + T);
       const scale = Math.max(...Array.from(row, Math.abs));
       expect(Math.abs(fast[i] - generic[i])).toBeLessThanOrEqual(1e-12 * scale);
+    }
+  });
+  }
+
+  it('with AP distortion, the fast B_l equal the generic average of TreeDirectIntegrand to 1e-12', () => {
+    const bins = enumerateTriangleBins(shellGrid(0.02, 0.08, 0.02));
+    const nodes = continuousBinNodes(bins, 3);
+    const rule = orientationRule(4, 6);
+    for (const extra of [{ velocityDispersion: 4 }, { irResummation: false }]) {
+      const settings = { spectrum, numberDensity: 2e-4, alphaPar: 1.05, alphaPerp: 0.98, ...extra };
+      const fast = new TreeMultipoleEvaluator(nodes, [0, 2], rule).evaluate(settings, params, false);
+      const generic = averageOverTriangleNodes(nodes, new TreeDirectIntegrand(settings, params), [0, 2], rule);
+      const nb = bins.size;
+      for (let b = 0; b < nb; b++) {
+        for (let m = 0; m < 2; m++) expect(Math.abs(fast[m * nb + b] - generic[2 * b + m])).toBeLessThanOrEqual(1e-12 * Math.abs(generic[2 * b]));
+      }
     }
   });
 });

@@ -96,12 +96,14 @@ describe('the HTML report in headless Chromium', () => {
   }
 
   it('opens with no console errors or outside requests, every plot visible and drawn', async () => {
+    browser(); // fail with the install hint before writing anything
     const file = join(folder, 'report.html');
     writeFileSync(file, renderReportHtml(input));
     await checkReportFile(file, input.figures.length);
   });
 
   it('shows the report of a real (small) joint fit the same way', async () => {
+    browser();
     const config = readRunConfig(writeSmallFitProblem(folder));
     const summary = await runJointFit(config, QUIET);
     await checkReportFile(writeFitReport(config, summary), 5);

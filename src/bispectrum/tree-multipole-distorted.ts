@@ -1,0 +1,204 @@
+import { expNegative } from '../numerics/fast-exp.js';
+import { kernelF2, kernelG2, kernelGalileonTidal } from '../perturbation/kernels.js';
+import { TabulatedSpectrum } from './tabulated-spectrum.js';
+import type { TreeBispectrumParameters } from './tree-template-terms.js';
+import { addPairTemplates } from './tree-template-integrand.js';
+import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
+import type { ResolvedTreeSettings } from './tree-settings.js';
+import type { TriangleNodeSet } from './triangle-node-set.js';
+
+/**
+ * The orientation loops of TreeMultipoleEvaluator with Alcock–Paczynski
+ * distortion: the same integrands as TreeDirectIntegrand and
+ * TreeTemplateIntegrand (triangle-physics.ts), written for the product rule.
+ * An observed side (k, mu) has the true length q = k sqrt(mu^2/apar^2 +
+ * (1 - mu^2)/aperp^2) and true line-of-sight component t = q nu = k mu / apar,
+ * so with u = k mu the three true t_i still sum to zero and
+ *   q^2 Sigma_tot^2(nu) = q^2 Sigma^2 + t^2 (a + c nu^2),  nu^2 = t^2 / q^2,
+ * the cosines between true sides follow from the true lengths, and side 1's
+ * true quantities change only with the mu node.
+ */
+export interface OrientationGeometry {
+  readonly nodes: TriangleNodeSet;
+  readonly multipoleCount: number;
+  readonly muCount: number;
+  readonly phiCount: number;
+  /** Per mu node: mu1; weight (2l+1) L_l(mu1) of one phi point [mu node][multipole]. */
+  readonly mu: Float64Array;
+  readonly muWeights: Float64Array;
+  /** Per orientation point: sqrt(1 - mu1^2) cos(phi). */
+  readonly lineOfSightSide2: Float64Array;
+  /** Per node: cos and sin of the observed angle between sides 1 and 2. */
+  readonly cos12: Float64Array;
+  readonly sin12: Float64Array;
+}
+
+/** Power on one true side: P_nw(q) + P_w(q) exp(-q^2 Sigma_tot^2), from q^2 and t^2. */
+interface SidePower {
+  (q2: number, t2: number): number;
+}
+
+function sidePowerOf(s: ResolvedTreeSettings): SidePower {
+  const sp = s.spectrum;
+  const tab = sp instanceof TabulatedSpectrum ? sp : undefined;
+  if (!s.irResummation) {
+    return tab ? (q2) => tab.power(Math.sqrt(q2)) : (q2) => sp.power(Math.sqrt(q2));
+  }
+  const fd = s.fForBaoDamping;
+  const sig2 = sp.sigma2BAO;
+  const a = fd * (2 + fd) * sig2 - fd * fd * sp.deltaSigma2BAO;
+  const c = fd * fd * sp.deltaSigma2BAO;
+  return (q2, t2) => {
+    const q = Math.sqrt(q2);
+    const nw = tab ? tab.powerNoWiggle(q) : sp.powerNoWiggle(q);
+    const w = tab ? tab.powerWiggle(q) : sp.power(q) - nw;
+    return nw + w * expNegative(q2 * sig2 + t2 * (a + (c * t2) / q2));
+  };
+}
+
+/** B_l [multipole][bin] with AP distortion. */
+export function distortedMultipoles(g: OrientationGeometry, s: ResolvedTreeSettings, p: TreeBispectrumParameters): Float64Array {
+  const { k1: K1, k2: K2, k3: K3, weight, start, binCount } = g.nodes;
+  const { multipoleCount: nm, muCount, phiCount, mu: MU, muWeights: WMU, lineOfSightSide2: SC } = g;
+  const out = new Float64Array(binCount * nm);
+  const power = sidePowerOf(s);
+  const ip2 = 1 / (s.alphaPar * s.alphaPar);
+  const iq2 = 1 / (s.alphaPerp * s.alphaPerp);
+  const vol = s.alphaPar * s.alphaPerp * s.alphaPerp;
+  const amp = 1 / (vol * vol);
+  const fog = s.velocityDispersion > 0;
+  const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
+  const n1 = s.inverseDensity;
+  const { b1, b2, bG2, f } = p;
+  const hb2 = 0.5 * b2;
+  const hf = 0.5 * f;
+  const stochConst = phiCount * p.bispShotConst * n1 * n1;
+  const stochP = p.bispShotPower * n1 * b1;
+  const acc = new Float64Array(nm);
+  for (let bin = 0; bin < binCount; bin++) {
+    acc.fill(0);
+    for (let i = start[bin]; i < start[bin + 1]; i++) {
+      const k1 = K1[i];
+      const k2 = K2[i];
+      const k3 = K3[i];
+      const a2 = k2 * g.cos12[i];
+      const bs2 = k2 * g.sin12[i];
+      const wn = weight[i];
+      for (let j = 0; j < muCount; j++) {
+        const u1 = k1 * MU[j];
+        const t1 = u1 * s.alphaPar * ip2;
+        const tt1 = t1 * t1;
+        const Q1 = u1 * u1 * ip2 + (k1 * k1 - u1 * u1) * iq2;
+        const q1 = Math.sqrt(Q1);
+        const v1 = t1 / Q1;
+        const z1 = b1 + (f * tt1) / Q1;
+        const zP1 = z1 * power(Q1, tt1);
+        const A2 = a2 * MU[j];
+        let sum = stochConst;
+        for (let ph = 0; ph < phiCount; ph++) {
+          const u2 = A2 - bs2 * SC[j * phiCount + ph];
+          const u3 = -u1 - u2;
+          const t2 = u2 * s.alphaPar * ip2;
+          const t3 = -t1 - t2;
+          const tt2 = t2 * t2;
+          const tt3 = t3 * t3;
+          const Q2 = u2 * u2 * ip2 + (k2 * k2 - u2 * u2) * iq2;
+          const Q3 = u3 * u3 * ip2 + (k3 * k3 - u3 * u3) * iq2;
+          const q2 = Math.sqrt(Q2);
+          const q3 = Math.sqrt(Q3);
+          const v2 = t2 / Q2;
+          const v3 = t3 / Q3;
+          const z2 = b1 + (f * tt2) / Q2;
+          const z3 = b1 + (f * tt3) / Q3;
+          const zP2 = z2 * power(Q2, tt2);
+          const zP3 = z3 * power(Q3, tt3);
+          // True cosines between the sides of each pair (closed triangle); Z2 as kernels.ts with mu k = -t_c.
+          const c12 = (Q3 - Q1 - Q2) / (2 * q1 * q2);
+          const c23 = (Q1 - Q2 - Q3) / (2 * q2 * q3);
+          const c31 = (Q2 - Q3 - Q1) / (2 * q3 * q1);
+          const zz12 = b1 * kernelF2(q1, q2, c12) + ((f * tt3) / Q3) * kernelG2(q1, q2, c12) - hf * t3 * (v1 * z2 + v2 * z1) + hb2 + bG2 * kernelGalileonTidal(c12);
+          const zz23 = b1 * kernelF2(q2, q3, c23) + ((f * tt1) / Q1) * kernelG2(q2, q3, c23) - hf * t1 * (v2 * z3 + v3 * z2) + hb2 + bG2 * kernelGalileonTidal(c23);
+          const zz31 = b1 * kernelF2(q3, q1, c31) + ((f * tt2) / Q2) * kernelG2(q3, q1, c31) - hf * t2 * (v3 * z1 + v1 * z3) + hb2 + bG2 * kernelGalileonTidal(c31);
+          let b = 2 * (zP1 * zP2 * zz12 + zP2 * zP3 * zz23 + zP3 * zP1 * zz31);
+          if (fog) b *= expNegative(halfSv2 * (tt1 + tt2 + tt3));
+          sum += b + stochP * (zP1 + zP2 + zP3);
+        }
+        for (let m = 0; m < nm; m++) acc[m] += wn * WMU[j * nm + m] * sum;
+      }
+    }
+    for (let m = 0; m < nm; m++) out[m * binCount + bin] = amp * acc[m];
+  }
+  return out;
+}
+
+/** Averaged templates [bin][multipole][value] with AP distortion. */
+export function distortedTemplates(g: OrientationGeometry, s: ResolvedTreeSettings): Float64Array {
+  const { k1: K1, k2: K2, k3: K3, weight, start, binCount } = g.nodes;
+  const { multipoleCount: nm, muCount, phiCount, mu: MU, muWeights: WMU, lineOfSightSide2: SC } = g;
+  const T = TREE_TEMPLATE_SIZE;
+  const out = new Float64Array(binCount * nm * T);
+  const power = sidePowerOf(s);
+  const ip2 = 1 / (s.alphaPar * s.alphaPar);
+  const iq2 = 1 / (s.alphaPerp * s.alphaPerp);
+  const vol = s.alphaPar * s.alphaPerp * s.alphaPerp;
+  const amp = 1 / (vol * vol);
+  const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
+  const n1 = s.inverseDensity;
+  const v = new Float64Array(T);
+  const perMu = new Float64Array(T);
+  const acc = new Float64Array(nm * T);
+  for (let bin = 0; bin < binCount; bin++) {
+    acc.fill(0);
+    for (let i = start[bin]; i < start[bin + 1]; i++) {
+      const k1 = K1[i];
+      const k2 = K2[i];
+      const k3 = K3[i];
+      const a2 = k2 * g.cos12[i];
+      const bs2 = k2 * g.sin12[i];
+      const wn = weight[i];
+      for (let j = 0; j < muCount; j++) {
+        const u1 = k1 * MU[j];
+        const t1 = u1 * s.alphaPar * ip2;
+        const Q1 = u1 * u1 * ip2 + (k1 * k1 - u1 * u1) * iq2;
+        const q1 = Math.sqrt(Q1);
+        const nu1 = t1 / q1;
+        const P1 = power(Q1, t1 * t1);
+        const A2 = a2 * MU[j];
+        perMu.fill(0);
+        for (let ph = 0; ph < phiCount; ph++) {
+          const u2 = A2 - bs2 * SC[j * phiCount + ph];
+          const u3 = -u1 - u2;
+          const t2 = u2 * s.alphaPar * ip2;
+          const t3 = -t1 - t2;
+          const Q2 = u2 * u2 * ip2 + (k2 * k2 - u2 * u2) * iq2;
+          const Q3 = u3 * u3 * ip2 + (k3 * k3 - u3 * u3) * iq2;
+          const q2 = Math.sqrt(Q2);
+          const q3 = Math.sqrt(Q3);
+          const nu2 = t2 / q2;
+          const nu3 = t3 / q3;
+          const P2 = power(Q2, t2 * t2);
+          const P3 = power(Q3, t3 * t3);
+          const damp = halfSv2 > 0 ? expNegative(halfSv2 * (t1 * t1 + t2 * t2 + t3 * t3)) : 1;
+          const c12 = (Q3 - Q1 - Q2) / (2 * q1 * q2);
+          const c23 = (Q1 - Q2 - Q3) / (2 * q2 * q3);
+          const c31 = (Q2 - Q3 - Q1) / (2 * q3 * q1);
+          for (let t = 0; t < 14; t++) v[t] = 0;
+          addPairTemplates(v, 0, 2 * damp * P1 * P2, -t3, 1 / q1, 1 / q2, nu1, nu2, nu3, kernelF2(q1, q2, c12), kernelG2(q1, q2, c12), kernelGalileonTidal(c12));
+          addPairTemplates(v, 0, 2 * damp * P2 * P3, -t1, 1 / q2, 1 / q3, nu2, nu3, nu1, kernelF2(q2, q3, c23), kernelG2(q2, q3, c23), kernelGalileonTidal(c23));
+          addPairTemplates(v, 0, 2 * damp * P3 * P1, -t2, 1 / q3, 1 / q1, nu3, nu1, nu2, kernelF2(q3, q1, c31), kernelG2(q3, q1, c31), kernelGalileonTidal(c31));
+          v[14] = n1 * (P1 + P2 + P3);
+          v[15] = n1 * (nu1 * nu1 * P1 + nu2 * nu2 * P2 + nu3 * nu3 * P3);
+          v[16] = n1 * n1;
+          for (let t = 0; t < T; t++) perMu[t] += v[t];
+        }
+        for (let m = 0; m < nm; m++) {
+          const w = amp * wn * WMU[j * nm + m];
+          const row = m * T;
+          for (let t = 0; t < T; t++) acc[row + t] += w * perMu[t];
+        }
+      }
+    }
+    out.set(acc, bin * nm * T);
+  }
+  return out;
+}
