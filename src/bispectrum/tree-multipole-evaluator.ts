@@ -132,6 +132,7 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
     const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
     const n1 = s.inverseDensity;
     const { noWiggle: NW, wiggle: WG } = this.sidePowers.fill(s);
+    const ix = this.sidePowers.index;
     const v = new Float64Array(T);
     const perMu = new Float64Array(T);
     const acc = new Float64Array(nm * T);
@@ -153,7 +154,7 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
           const m1 = MU[j];
           const u1 = k1 * m1;
           const q1 = m1 * m1;
-          const P1 = NW[3 * i] + WG[3 * i] * expNegative(u1 * u1 * (aIR + cIR * q1));
+          const P1 = NW[ix[3 * i]] + WG[ix[3 * i]] * expNegative(u1 * u1 * (aIR + cIR * q1));
           perMu.fill(0);
           for (let p = 0; p < phiCount; p++) {
             // LOS components u_i = k_i mu_i of the three sides; u1 + u2 + u3 = 0.
@@ -163,8 +164,8 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
             const m3 = u3 * i3;
             const q2 = m2 * m2;
             const q3 = m3 * m3;
-            const P2 = NW[3 * i + 1] + WG[3 * i + 1] * expNegative(u2 * u2 * (aIR + cIR * q2));
-            const P3 = NW[3 * i + 2] + WG[3 * i + 2] * expNegative(u3 * u3 * (aIR + cIR * q3));
+            const P2 = NW[ix[3 * i + 1]] + WG[ix[3 * i + 1]] * expNegative(u2 * u2 * (aIR + cIR * q2));
+            const P3 = NW[ix[3 * i + 2]] + WG[ix[3 * i + 2]] * expNegative(u3 * u3 * (aIR + cIR * q3));
             const damp = halfSv2 > 0 ? expNegative(halfSv2 * (u1 * u1 + u2 * u2 + u3 * u3)) : 1;
             for (let t = 0; t < 14; t++) v[t] = 0;
             addPairTemplates(v, 0, 2 * damp * P1 * P2, -u3, i1, i2, m1, m2, m3, pk[o9], pk[o9 + 1], pk[o9 + 2]);
@@ -203,6 +204,7 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
     const stochConst = phiCount * p.bispShotConst * n1 * n1;
     const stochP = p.bispShotPower * n1 * b1;
     const { noWiggle: NW, wiggle: WG } = this.sidePowers.fill(s);
+    const ix = this.sidePowers.index;
     const pk = this.pairKernels;
     const acc = new Float64Array(nm);
     for (let bin = 0; bin < binCount; bin++) {
@@ -224,12 +226,12 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
         const g12 = f * pk[o9 + 1];
         const g23 = f * pk[o9 + 4];
         const g31 = f * pk[o9 + 7];
-        const nw1 = NW[3 * i];
-        const nw2 = NW[3 * i + 1];
-        const nw3 = NW[3 * i + 2];
-        const w1 = WG[3 * i];
-        const w2 = WG[3 * i + 1];
-        const w3 = WG[3 * i + 2];
+        const nw1 = NW[ix[3 * i]];
+        const nw2 = NW[ix[3 * i + 1]];
+        const nw3 = NW[ix[3 * i + 2]];
+        const w1 = WG[ix[3 * i]];
+        const w2 = WG[ix[3 * i + 1]];
+        const w3 = WG[ix[3 * i + 2]];
         const wn = weight[i];
         for (let j = 0; j < muCount; j++) {
           const m1 = MU[j];
@@ -237,34 +239,39 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
           const uu1 = u1 * u1;
           const q1 = m1 * m1;
           const z1 = b1 + f * q1;
-          const v1 = u1 * ik1;
-          const P1 = nw1 + w1 * expNegative(uu1 * (aIR + cIR * q1));
-          const zP1 = z1 * P1;
+          const zP1 = z1 * (nw1 + w1 * expNegative(uu1 * (aIR + cIR * q1)));
+          // Per mu node: (f/2) mu1/k1, (f/2) Z1(k1), (f/2) u1 and the mu1-only part of Z2(k2, k3).
+          const hv1 = hf * u1 * ik1;
+          const hz1 = hf * z1;
+          const hu1 = hf * u1;
+          const cg23 = c23 + g23 * q1;
           const A2 = a2 * m1;
-          let sum = stochConst;
+          let det = 0;
+          let lin = 0;
           for (let ph = 0; ph < phiCount; ph++) {
             // LOS components u_i = k_i mu_i of the three sides; u1 + u2 + u3 = 0.
             const u2 = A2 - bs2 * SC[j * phiCount + ph];
             const u3 = -u1 - u2;
-            const uu2 = u2 * u2;
-            const uu3 = u3 * u3;
-            const q2 = uu2 * ik2;
-            const q3 = uu3 * ik3;
-            const z2 = b1 + f * q2;
-            const z3 = b1 + f * q3;
             const v2 = u2 * ik2;
             const v3 = u3 * ik3;
+            const uu2 = u2 * u2;
+            const uu3 = u3 * u3;
+            const q2 = u2 * v2;
+            const q3 = u3 * v3;
+            const z2 = b1 + f * q2;
+            const z3 = b1 + f * q3;
             const zP2 = z2 * (nw2 + w2 * expNegative(uu2 * (aIR + cIR * q2)));
             const zP3 = z3 * (nw3 + w3 * expNegative(uu3 * (aIR + cIR * q3)));
             // Z2 of each pair (Scoccimarro, Couchman & Frieman 1999, eq. 13): the pair (a, b) sums to -k_c,
             // so mu k = u_a + u_b = -u_c and the velocity term is -(f/2) u_c (mu_a/k_a Z1_b + mu_b/k_b Z1_a).
-            const zz12 = c12 + g12 * q3 - hf * u3 * (v1 * z2 + v2 * z1);
-            const zz23 = c23 + g23 * q1 - hf * u1 * (v2 * z3 + v3 * z2);
-            const zz31 = c31 + g31 * q2 - hf * u2 * (v3 * z1 + v1 * z3);
-            let b = 2 * (zP1 * zP2 * zz12 + zP2 * zP3 * zz23 + zP3 * zP1 * zz31);
-            if (fog) b *= expNegative(halfSv2 * (uu1 + uu2 + uu3));
-            sum += b + stochP * (zP1 + zP2 + zP3);
+            const zz12 = c12 + g12 * q3 - u3 * (hv1 * z2 + v2 * hz1);
+            const zz23 = cg23 - hu1 * (v2 * z3 + v3 * z2);
+            const zz31 = c31 + g31 * q2 - u2 * (v3 * hz1 + hv1 * z3);
+            const d = zP2 * (zP1 * zz12 + zP3 * zz23) + zP3 * zP1 * zz31;
+            det += fog ? d * expNegative(halfSv2 * (uu1 + uu2 + uu3)) : d;
+            lin += zP2 + zP3;
           }
+          const sum = 2 * det + stochP * (phiCount * zP1 + lin) + stochConst;
           for (let m = 0; m < nm; m++) acc[m] += wn * WMU[j * nm + m] * sum;
         }
       }
