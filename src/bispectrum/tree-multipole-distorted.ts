@@ -182,14 +182,12 @@ export function distortedTemplates(g: OrientationGeometry, s: ResolvedTreeSettin
           const c12 = (Q3 - Q1 - Q2) / (2 * q1 * q2);
           const c23 = (Q1 - Q2 - Q3) / (2 * q2 * q3);
           const c31 = (Q2 - Q3 - Q1) / (2 * q3 * q1);
-          for (let t = 0; t < 14; t++) v[t] = 0;
-          addPairTemplates(v, 0, 2 * damp * P1 * P2, -t3, 1 / q1, 1 / q2, nu1, nu2, nu3, kernelF2(q1, q2, c12), kernelG2(q1, q2, c12), kernelGalileonTidal(c12));
-          addPairTemplates(v, 0, 2 * damp * P2 * P3, -t1, 1 / q2, 1 / q3, nu2, nu3, nu1, kernelF2(q2, q3, c23), kernelG2(q2, q3, c23), kernelGalileonTidal(c23));
-          addPairTemplates(v, 0, 2 * damp * P3 * P1, -t2, 1 / q3, 1 / q1, nu3, nu1, nu2, kernelF2(q3, q1, c31), kernelG2(q3, q1, c31), kernelGalileonTidal(c31));
-          v[14] = n1 * (P1 + P2 + P3);
-          v[15] = n1 * (nu1 * nu1 * P1 + nu2 * nu2 * P2 + nu3 * nu3 * P3);
-          v[16] = n1 * n1;
-          for (let t = 0; t < T; t++) perMu[t] += v[t];
+          addPairTemplates(perMu, 0, 2 * damp * P1 * P2, -t3, 1 / q1, 1 / q2, nu1, nu2, nu3, kernelF2(q1, q2, c12), kernelG2(q1, q2, c12), kernelGalileonTidal(c12));
+          addPairTemplates(perMu, 0, 2 * damp * P2 * P3, -t1, 1 / q2, 1 / q3, nu2, nu3, nu1, kernelF2(q2, q3, c23), kernelG2(q2, q3, c23), kernelGalileonTidal(c23));
+          addPairTemplates(perMu, 0, 2 * damp * P3 * P1, -t2, 1 / q3, 1 / q1, nu3, nu1, nu2, kernelF2(q3, q1, c31), kernelG2(q3, q1, c31), kernelGalileonTidal(c31));
+          perMu[14] += n1 * (P1 + P2 + P3);
+          perMu[15] += n1 * (nu1 * nu1 * P1 + nu2 * nu2 * P2 + nu3 * nu3 * P3);
+          perMu[16] += n1 * n1;
         }
         for (let m = 0; m < nm; m++) {
           const w = amp * wn * WMU[j * nm + m];

@@ -133,7 +133,6 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
     const n1 = s.inverseDensity;
     const { noWiggle: NW, wiggle: WG } = this.sidePowers.fill(s);
     const ix = this.sidePowers.index;
-    const v = new Float64Array(T);
     const perMu = new Float64Array(T);
     const acc = new Float64Array(nm * T);
     const pk = this.pairKernels;
@@ -167,14 +166,12 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
             const P2 = NW[ix[3 * i + 1]] + WG[ix[3 * i + 1]] * expNegative(u2 * u2 * (aIR + cIR * q2));
             const P3 = NW[ix[3 * i + 2]] + WG[ix[3 * i + 2]] * expNegative(u3 * u3 * (aIR + cIR * q3));
             const damp = halfSv2 > 0 ? expNegative(halfSv2 * (u1 * u1 + u2 * u2 + u3 * u3)) : 1;
-            for (let t = 0; t < 14; t++) v[t] = 0;
-            addPairTemplates(v, 0, 2 * damp * P1 * P2, -u3, i1, i2, m1, m2, m3, pk[o9], pk[o9 + 1], pk[o9 + 2]);
-            addPairTemplates(v, 0, 2 * damp * P2 * P3, -u1, i2, i3, m2, m3, m1, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5]);
-            addPairTemplates(v, 0, 2 * damp * P3 * P1, -u2, i3, i1, m3, m1, m2, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8]);
-            v[14] = n1 * (P1 + P2 + P3);
-            v[15] = n1 * (q1 * P1 + q2 * P2 + q3 * P3);
-            v[16] = n1 * n1;
-            for (let t = 0; t < T; t++) perMu[t] += v[t];
+            addPairTemplates(perMu, 0, 2 * damp * P1 * P2, -u3, i1, i2, m1, m2, m3, pk[o9], pk[o9 + 1], pk[o9 + 2]);
+            addPairTemplates(perMu, 0, 2 * damp * P2 * P3, -u1, i2, i3, m2, m3, m1, pk[o9 + 3], pk[o9 + 4], pk[o9 + 5]);
+            addPairTemplates(perMu, 0, 2 * damp * P3 * P1, -u2, i3, i1, m3, m1, m2, pk[o9 + 6], pk[o9 + 7], pk[o9 + 8]);
+            perMu[14] += n1 * (P1 + P2 + P3);
+            perMu[15] += n1 * (q1 * P1 + q2 * P2 + q3 * P3);
+            perMu[16] += n1 * n1;
           }
           for (let m = 0; m < nm; m++) {
             const w = wn * WMU[j * nm + m];
