@@ -1,5 +1,5 @@
 import type { LinearSpectrum } from '../contracts/linear-spectrum.js';
-import { CubicSpline } from '../numerics/cubic-spline.js';
+import { CubicSpline, SharedGridSplines } from '../numerics/cubic-spline.js';
 
 /**
  * A LinearSpectrum re-tabulated on a uniform k grid over [kLo, kHi] with
@@ -25,6 +25,7 @@ export class TabulatedSpectrum implements LinearSpectrum {
   /** The splines of P_nw and P_w (one grid), for SplineStencil lookups. */
   readonly noWiggle: CubicSpline;
   readonly wiggle: CubicSpline;
+  private readonly pair: SharedGridSplines;
   private readonly source: LinearSpectrum;
 
   constructor(source: LinearSpectrum, kLo: number, kHi: number, points = 2000) {
@@ -44,6 +45,7 @@ export class TabulatedSpectrum implements LinearSpectrum {
     }
     this.noWiggle = new CubicSpline(k, nw);
     this.wiggle = new CubicSpline(k, w);
+    this.pair = new SharedGridSplines(this.noWiggle, this.wiggle);
     this.source = source;
     this.redshift = source.redshift;
     this.kMin = Math.max(source.kMin, a);
@@ -60,6 +62,11 @@ export class TabulatedSpectrum implements LinearSpectrum {
 
   powerNoWiggle(k: number): number {
     return this.noWiggle.at(k);
+  }
+
+  /** P_nw(k) + damping P_w(k), both splines at once (inside the table's range). */
+  dampedPower(k: number, damping: number): number {
+    return this.pair.sum(k, damping);
   }
 
   /** P_w = P - P_nw. */

@@ -1,5 +1,5 @@
 import { expNegative } from '../numerics/fast-exp.js';
-import { kernelF2, kernelG2, kernelGalileonTidal } from '../perturbation/kernels.js';
+import { kernelF2FromRatios, kernelG2FromRatios, kernelGalileonTidal } from '../perturbation/kernels.js';
 import { TabulatedSpectrum } from './tabulated-spectrum.js';
 import type { TreeBispectrumParameters } from './tree-template-terms.js';
 import { addPairTemplates } from './tree-template-integrand.js';
@@ -33,26 +33,24 @@ export interface OrientationGeometry {
   readonly sin12: Float64Array;
 }
 
-/** Power on one true side: P_nw(q) + P_w(q) exp(-q^2 Sigma_tot^2), from q^2 and t^2. */
+/** Power on one true side, P_nw(q) + P_w(q) exp(-q^2 Sigma_tot^2(nu)), from q^2, t^2 = (q nu)^2 and nu^2. */
 interface SidePower {
-  (q2: number, t2: number): number;
+  (q2: number, t2: number, nu2: number): number;
 }
 
 function sidePowerOf(s: ResolvedTreeSettings): SidePower {
   const sp = s.spectrum;
   const tab = sp instanceof TabulatedSpectrum ? sp : undefined;
-  if (!s.irResummation) {
-    return tab ? (q2) => tab.power(Math.sqrt(q2)) : (q2) => sp.power(Math.sqrt(q2));
-  }
+  if (!s.irResummation) return tab ? (q2) => tab.dampedPower(Math.sqrt(q2), 1) : (q2) => sp.power(Math.sqrt(q2));
   const fd = s.fForBaoDamping;
   const sig2 = sp.sigma2BAO;
   const a = fd * (2 + fd) * sig2 - fd * fd * sp.deltaSigma2BAO;
   const c = fd * fd * sp.deltaSigma2BAO;
-  return (q2, t2) => {
+  if (tab) return (q2, t2, nu2) => tab.dampedPower(Math.sqrt(q2), expNegative(q2 * sig2 + t2 * (a + c * nu2)));
+  return (q2, t2, nu2) => {
     const q = Math.sqrt(q2);
-    const nw = tab ? tab.powerNoWiggle(q) : sp.powerNoWiggle(q);
-    const w = tab ? tab.powerWiggle(q) : sp.power(q) - nw;
-    return nw + w * expNegative(q2 * sig2 + t2 * (a + (c * t2) / q2));
+    const nw = sp.powerNoWiggle(q);
+    return nw + (sp.power(q) - nw) * expNegative(q2 * sig2 + t2 * (a + c * nu2));
   };
 }
 
@@ -91,8 +89,9 @@ export function distortedMultipoles(g: OrientationGeometry, s: ResolvedTreeSetti
         const Q1 = u1 * u1 * ip2 + (k1 * k1 - u1 * u1) * iq2;
         const q1 = Math.sqrt(Q1);
         const v1 = t1 / Q1;
-        const z1 = b1 + (f * tt1) / Q1;
-        const zP1 = z1 * power(Q1, tt1);
+        const nn1 = t1 * v1;
+        const z1 = b1 + f * nn1;
+        const zP1 = z1 * power(Q1, tt1, nn1);
         const A2 = a2 * MU[j];
         let sum = stochConst;
         for (let ph = 0; ph < phiCount; ph++) {
@@ -108,17 +107,26 @@ export function distortedMultipoles(g: OrientationGeometry, s: ResolvedTreeSetti
           const q3 = Math.sqrt(Q3);
           const v2 = t2 / Q2;
           const v3 = t3 / Q3;
-          const z2 = b1 + (f * tt2) / Q2;
-          const z3 = b1 + (f * tt3) / Q3;
-          const zP2 = z2 * power(Q2, tt2);
-          const zP3 = z3 * power(Q3, tt3);
-          // True cosines between the sides of each pair (closed triangle); Z2 as kernels.ts with mu k = -t_c.
-          const c12 = (Q3 - Q1 - Q2) / (2 * q1 * q2);
-          const c23 = (Q1 - Q2 - Q3) / (2 * q2 * q3);
-          const c31 = (Q2 - Q3 - Q1) / (2 * q3 * q1);
-          const zz12 = b1 * kernelF2(q1, q2, c12) + ((f * tt3) / Q3) * kernelG2(q1, q2, c12) - hf * t3 * (v1 * z2 + v2 * z1) + hb2 + bG2 * kernelGalileonTidal(c12);
-          const zz23 = b1 * kernelF2(q2, q3, c23) + ((f * tt1) / Q1) * kernelG2(q2, q3, c23) - hf * t1 * (v2 * z3 + v3 * z2) + hb2 + bG2 * kernelGalileonTidal(c23);
-          const zz31 = b1 * kernelF2(q3, q1, c31) + ((f * tt2) / Q2) * kernelG2(q3, q1, c31) - hf * t2 * (v3 * z1 + v1 * z3) + hb2 + bG2 * kernelGalileonTidal(c31);
+          const nn2 = t2 * v2;
+          const nn3 = t3 * v3;
+          const z2 = b1 + f * nn2;
+          const z3 = b1 + f * nn3;
+          const zP2 = z2 * power(Q2, tt2, nn2);
+          const zP3 = z3 * power(Q3, tt3, nn3);
+          // True cosines between the sides of each pair (closed triangle) and ka/kb + kb/ka;
+          // Z2 as kernels.ts with mu k = -t_c.
+          const i12 = 1 / (q1 * q2);
+          const i23 = 1 / (q2 * q3);
+          const i31 = 1 / (q3 * q1);
+          const c12 = 0.5 * (Q3 - Q1 - Q2) * i12;
+          const c23 = 0.5 * (Q1 - Q2 - Q3) * i23;
+          const c31 = 0.5 * (Q2 - Q3 - Q1) * i31;
+          const r12 = (Q1 + Q2) * i12;
+          const r23 = (Q2 + Q3) * i23;
+          const r31 = (Q3 + Q1) * i31;
+          const zz12 = b1 * kernelF2FromRatios(c12, r12) + f * nn3 * kernelG2FromRatios(c12, r12) - hf * t3 * (v1 * z2 + v2 * z1) + hb2 + bG2 * kernelGalileonTidal(c12);
+          const zz23 = b1 * kernelF2FromRatios(c23, r23) + f * nn1 * kernelG2FromRatios(c23, r23) - hf * t1 * (v2 * z3 + v3 * z2) + hb2 + bG2 * kernelGalileonTidal(c23);
+          const zz31 = b1 * kernelF2FromRatios(c31, r31) + f * nn2 * kernelG2FromRatios(c31, r31) - hf * t2 * (v3 * z1 + v1 * z3) + hb2 + bG2 * kernelGalileonTidal(c31);
           let b = 2 * (zP1 * zP2 * zz12 + zP2 * zP3 * zz23 + zP3 * zP1 * zz31);
           if (fog) b *= expNegative(halfSv2 * (tt1 + tt2 + tt3));
           sum += b + stochP * (zP1 + zP2 + zP3);
@@ -162,7 +170,7 @@ export function distortedTemplates(g: OrientationGeometry, s: ResolvedTreeSettin
         const Q1 = u1 * u1 * ip2 + (k1 * k1 - u1 * u1) * iq2;
         const q1 = Math.sqrt(Q1);
         const nu1 = t1 / q1;
-        const P1 = power(Q1, t1 * t1);
+        const P1 = power(Q1, t1 * t1, nu1 * nu1);
         const A2 = a2 * MU[j];
         perMu.fill(0);
         for (let ph = 0; ph < phiCount; ph++) {
@@ -176,15 +184,21 @@ export function distortedTemplates(g: OrientationGeometry, s: ResolvedTreeSettin
           const q3 = Math.sqrt(Q3);
           const nu2 = t2 / q2;
           const nu3 = t3 / q3;
-          const P2 = power(Q2, t2 * t2);
-          const P3 = power(Q3, t3 * t3);
+          const P2 = power(Q2, t2 * t2, nu2 * nu2);
+          const P3 = power(Q3, t3 * t3, nu3 * nu3);
           const damp = halfSv2 > 0 ? expNegative(halfSv2 * (t1 * t1 + t2 * t2 + t3 * t3)) : 1;
-          const c12 = (Q3 - Q1 - Q2) / (2 * q1 * q2);
-          const c23 = (Q1 - Q2 - Q3) / (2 * q2 * q3);
-          const c31 = (Q2 - Q3 - Q1) / (2 * q3 * q1);
-          addPairTemplates(perMu, 0, 2 * damp * P1 * P2, -t3, 1 / q1, 1 / q2, nu1, nu2, nu3, kernelF2(q1, q2, c12), kernelG2(q1, q2, c12), kernelGalileonTidal(c12));
-          addPairTemplates(perMu, 0, 2 * damp * P2 * P3, -t1, 1 / q2, 1 / q3, nu2, nu3, nu1, kernelF2(q2, q3, c23), kernelG2(q2, q3, c23), kernelGalileonTidal(c23));
-          addPairTemplates(perMu, 0, 2 * damp * P3 * P1, -t2, 1 / q3, 1 / q1, nu3, nu1, nu2, kernelF2(q3, q1, c31), kernelG2(q3, q1, c31), kernelGalileonTidal(c31));
+          const i12 = 1 / (q1 * q2);
+          const i23 = 1 / (q2 * q3);
+          const i31 = 1 / (q3 * q1);
+          const c12 = 0.5 * (Q3 - Q1 - Q2) * i12;
+          const c23 = 0.5 * (Q1 - Q2 - Q3) * i23;
+          const c31 = 0.5 * (Q2 - Q3 - Q1) * i31;
+          const r12 = (Q1 + Q2) * i12;
+          const r23 = (Q2 + Q3) * i23;
+          const r31 = (Q3 + Q1) * i31;
+          addPairTemplates(perMu, 0, 2 * damp * P1 * P2, -t3, 1 / q1, 1 / q2, nu1, nu2, nu3, kernelF2FromRatios(c12, r12), kernelG2FromRatios(c12, r12), kernelGalileonTidal(c12));
+          addPairTemplates(perMu, 0, 2 * damp * P2 * P3, -t1, 1 / q2, 1 / q3, nu2, nu3, nu1, kernelF2FromRatios(c23, r23), kernelG2FromRatios(c23, r23), kernelGalileonTidal(c23));
+          addPairTemplates(perMu, 0, 2 * damp * P3 * P1, -t2, 1 / q3, 1 / q1, nu3, nu1, nu2, kernelF2FromRatios(c31, r31), kernelG2FromRatios(c31, r31), kernelGalileonTidal(c31));
           perMu[14] += n1 * (P1 + P2 + P3);
           perMu[15] += n1 * (nu1 * nu1 * P1 + nu2 * nu2 * P2 + nu3 * nu3 * P3);
           perMu[16] += n1 * n1;

@@ -145,3 +145,53 @@ export class LogLogSpline {
     return out;
   }
 }
+
+/**
+ * Two natural cubic splines on one uniform grid, evaluated together as
+ * s1(t) + c s2(t): one interval search and one set of weights (eq. 3.3.3 as in
+ * CubicSpline.at) for both, with no calls inside — for hot loops. Outside the
+ * grid the end intervals' cubics are continued (callers keep t in range).
+ */
+export class SharedGridSplines {
+  private readonly x: Float64Array;
+  private readonly y1: Float64Array;
+  private readonly d1: Float64Array;
+  private readonly y2: Float64Array;
+  private readonly d2: Float64Array;
+  private readonly x0: number;
+  private readonly invStep: number;
+  private readonly step2over6: number;
+  private readonly last: number;
+
+  constructor(first: CubicSpline, second: CubicSpline) {
+    const n = first.x.length;
+    const step = (first.x1 - first.x0) / (n - 1);
+    for (let i = 0; i < n; i++) {
+      if (second.x[i] !== first.x[i] || Math.abs(first.x[i] - first.x0 - i * step) > 1e-9 * step) {
+        throw new RangeError('SharedGridSplines needs two splines on one uniform grid');
+      }
+    }
+    this.x = first.x;
+    this.y1 = first.y;
+    this.d1 = first.y2;
+    this.y2 = second.y;
+    this.d2 = second.y2;
+    this.x0 = first.x0;
+    this.invStep = 1 / step;
+    this.step2over6 = (step * step) / 6;
+    this.last = n - 2;
+  }
+
+  /** s1(t) + c s2(t). */
+  sum(t: number, c: number): number {
+    let i = Math.floor((t - this.x0) * this.invStep);
+    if (i < 0) i = 0;
+    else if (i > this.last) i = this.last;
+    const a = (this.x[i + 1] - t) * this.invStep;
+    const b = 1 - a;
+    const ca = (a * a * a - a) * this.step2over6;
+    const cb = (b * b * b - b) * this.step2over6;
+    const { y1, d1, y2, d2 } = this;
+    return a * y1[i] + b * y1[i + 1] + ca * d1[i] + cb * d1[i + 1] + c * (a * y2[i] + b * y2[i + 1] + ca * d2[i] + cb * d2[i + 1]);
+  }
+}

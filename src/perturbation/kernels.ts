@@ -12,12 +12,22 @@
 
 /** F2(k_a, k_b) = 5/7 + (mu_ab/2)(ka/kb + kb/ka) + (2/7) mu_ab^2. */
 export function kernelF2(ka: number, kb: number, muAB: number): number {
-  return 5 / 7 + 0.5 * muAB * (ka / kb + kb / ka) + (2 / 7) * muAB * muAB;
+  return kernelF2FromRatios(muAB, ka / kb + kb / ka);
 }
 
 /** G2(k_a, k_b) = 3/7 + (mu_ab/2)(ka/kb + kb/ka) + (4/7) mu_ab^2. */
 export function kernelG2(ka: number, kb: number, muAB: number): number {
-  return 3 / 7 + 0.5 * muAB * (ka / kb + kb / ka) + (4 / 7) * muAB * muAB;
+  return kernelG2FromRatios(muAB, ka / kb + kb / ka);
+}
+
+/** F2 from mu_ab and ratios = ka/kb + kb/ka = (ka^2 + kb^2) / (ka kb). */
+export function kernelF2FromRatios(muAB: number, ratios: number): number {
+  return 5 / 7 + 0.5 * muAB * ratios + (2 / 7) * muAB * muAB;
+}
+
+/** G2 from mu_ab and ratios = ka/kb + kb/ka. */
+export function kernelG2FromRatios(muAB: number, ratios: number): number {
+  return 3 / 7 + 0.5 * muAB * ratios + (4 / 7) * muAB * muAB;
 }
 
 /** Galileon tidal kernel sigma^2(k_a, k_b) = mu_ab^2 - 1. */

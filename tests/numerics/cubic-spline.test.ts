@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CubicSpline, LogLogSpline } from '../../src/numerics/cubic-spline.js';
+import { CubicSpline, LogLogSpline, SharedGridSplines } from '../../src/numerics/cubic-spline.js';
 
 describe('cubic spline', () => {
   it('interpolates sin to the O(h^4) accuracy of a cubic spline away from the ends', () => {
@@ -34,5 +34,24 @@ describe('cubic spline', () => {
   it('refuses non-increasing abscissae and non-positive log-log values', () => {
     expect(() => new CubicSpline([0, 1, 1], [0, 1, 2])).toThrow(/increase strictly.*index 2/);
     expect(() => new LogLogSpline([1, 2, 3], [1, 0, 2])).toThrow(/row 1/);
+  });
+});
+
+describe('SharedGridSplines', () => {
+  it('gives s1(t) + c s2(t) as two CubicSpline.at calls, to 1e-14, and refuses grids that differ or are not uniform', () => {
+    const x = Float64Array.from({ length: 50 }, (_, i) => 0.004 + 0.003 * i);
+    const s1 = new CubicSpline(x, x.map((v) => 1e4 * Math.exp(-20 * v)));
+    const s2 = new CubicSpline(x, x.map((v) => 300 * Math.sin(100 * v)));
+    const pair = new SharedGridSplines(s1, s2);
+    for (let p = 0; p <= 1000; p++) {
+      const t = x[0] + ((x[49] - x[0]) * p) / 1000;
+      for (const c of [0, 0.37, 1]) {
+        const want = s1.at(t) + c * s2.at(t);
+        expect(Math.abs(pair.sum(t, c) - want)).toBeLessThanOrEqual(1e-14 * (Math.abs(s1.at(t)) + Math.abs(s2.at(t))));
+      }
+    }
+    expect(() => new SharedGridSplines(s1, new CubicSpline(x.map((v) => v * 1.001), x))).toThrow(/one uniform grid/);
+    const bent = x.map((v, i) => v + 1e-4 * i * i);
+    expect(() => new SharedGridSplines(new CubicSpline(bent, x), new CubicSpline(bent, x))).toThrow(/one uniform grid/);
   });
 });
