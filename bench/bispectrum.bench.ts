@@ -7,6 +7,9 @@
  *     weights) is precomputed once and timed separately; the producer's own cost
  *     of building a spectrum is reported apart as well.
  * (b) re-evaluation for new bias and stochastic parameters from templates.
+ * Also, for reference: the same full evaluation without IR resummation and with
+ * AP distortion, and the template build with AP distortion (the path a fit with
+ * free alpha_par, alpha_perp takes on every call).
  */
 import type { Benchmark } from './harness.js';
 import { timeMedian } from './harness.js';
@@ -89,13 +92,27 @@ const bench: Benchmark = {
       let d = 0;
       const reeval = timeMedian(() => combineTreeTemplates(templates, 2, draws[d++ % draws.length], out), 200, 20);
       const reevalCpuMs = cpuMean(() => combineTreeTemplates(templates, 2, draws[d++ % draws.length], out), 2000);
+      // The same evaluation with IR resummation off (the model is then a polynomial in the cosines and the
+      // exact 3 x 5 rule applies), and with AP distortion (true wavenumbers per orientation point).
+      const noIR = (spectrum: LinearSpectrum) => ({ ...settingsOf(spectrum), irResummation: false });
+      const polyRule = defaultTreeOrientationRule(resolveTreeSettings(noIR(spectra[0])), 2, kMax + dk);
+      const polyEvaluator = new TreeMultipoleEvaluator(nodes, [0, 2], polyRule);
+      const noIrCpuMs = cpuMean(() => polyEvaluator.evaluate(noIR(spectra[next++ % spectra.length]), params), repeats);
+      const ap = (spectrum: LinearSpectrum) => ({ ...settingsOf(spectrum), alphaPar: 1.02, alphaPerp: 0.99 });
+      const apRule = defaultTreeOrientationRule(resolveTreeSettings(ap(spectra[0])), 2, kMax + dk);
+      const apEvaluator = new TreeMultipoleEvaluator(nodes, [0, 2], apRule);
+      const apCpuMs = cpuMean(() => apEvaluator.evaluate(ap(spectra[next++ % spectra.length]), params), Math.ceil(repeats / 3));
+      const apTemplatesCpuMs = cpuMean(() => apEvaluator.templates(ap(spectra[next++ % spectra.length])), Math.ceil(repeats / 3));
       results[`bins${bins.size}`] = {
         binning: { kMin, kMax, dk, bins: bins.size },
         geometry: { volumeNodes: nodes.weight.length, orientationPoints: rule.weight.length, precomputeMs: geometryMs },
+        pointsPerEvaluation: nodes.weight.length * rule.weight.length,
         fullEvaluationMs: full,
         fullEvaluationCpuMs: fullCpuMs,
         fullEvaluationTargetMs: bins.size === 477 ? 10 : 100,
         maxRelativeDifferenceToFinerQuadrature: maxRelative(value, fine),
+        withoutIrResummation: { orientationPoints: polyRule.weight.length, fullEvaluationCpuMs: noIrCpuMs },
+        withAlcockPaczynski: { alphaPar: 1.02, alphaPerp: 0.99, orientationPoints: apRule.weight.length, fullEvaluationCpuMs: apCpuMs, templateBuildCpuMs: apTemplatesCpuMs },
         templateBuildFromNewSpectrumMs: templateBuildMs,
         templateReEvaluationMs: reeval,
         templateReEvaluationCpuMs: reevalCpuMs,

@@ -6,6 +6,7 @@ import { addPairTemplates } from './tree-template-integrand.js';
 import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
 import type { ResolvedTreeSettings } from './tree-settings.js';
 import type { TriangleNodeSet } from './triangle-node-set.js';
+import { directLoopConstants } from './tree-loop-constants.js';
 
 /**
  * The orientation loops of TreeMultipoleEvaluator with Alcock–Paczynski
@@ -54,24 +55,25 @@ function sidePowerOf(s: ResolvedTreeSettings): SidePower {
   };
 }
 
+/** 1/apar^2, 1/aperp^2 and the amplitude 1/(apar aperp^2)^2. */
+function dilation(s: ResolvedTreeSettings): { ip2: number; iq2: number; amp: number } {
+  const vol = s.alphaPar * s.alphaPerp * s.alphaPerp;
+  return { ip2: 1 / (s.alphaPar * s.alphaPar), iq2: 1 / (s.alphaPerp * s.alphaPerp), amp: 1 / (vol * vol) };
+}
+
+/** q^2 = k^2 [mu^2/apar^2 + (1 - mu^2)/aperp^2] from k and u = k mu. */
+function trueLengthSquared(k: number, u: number, ip2: number, iq2: number): number {
+  return u * u * ip2 + (k * k - u * u) * iq2;
+}
+
 /** B_l [multipole][bin] with AP distortion. */
 export function distortedMultipoles(g: OrientationGeometry, s: ResolvedTreeSettings, p: TreeBispectrumParameters): Float64Array {
   const { k1: K1, k2: K2, k3: K3, weight, start, binCount } = g.nodes;
   const { multipoleCount: nm, muCount, phiCount, mu: MU, muWeights: WMU, lineOfSightSide2: SC } = g;
   const out = new Float64Array(binCount * nm);
   const power = sidePowerOf(s);
-  const ip2 = 1 / (s.alphaPar * s.alphaPar);
-  const iq2 = 1 / (s.alphaPerp * s.alphaPerp);
-  const vol = s.alphaPar * s.alphaPerp * s.alphaPerp;
-  const amp = 1 / (vol * vol);
-  const fog = s.velocityDispersion > 0;
-  const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
-  const n1 = s.inverseDensity;
-  const { b1, b2, bG2, f } = p;
-  const hb2 = 0.5 * b2;
-  const hf = 0.5 * f;
-  const stochConst = phiCount * p.bispShotConst * n1 * n1;
-  const stochP = p.bispShotPower * n1 * b1;
+  const { ip2, iq2, amp } = dilation(s);
+  const { fog, halfSv2, b1, bG2, f, hb2, hf, stochConst, stochP } = directLoopConstants(s, p, phiCount);
   const acc = new Float64Array(nm);
   for (let bin = 0; bin < binCount; bin++) {
     acc.fill(0);
@@ -84,9 +86,9 @@ export function distortedMultipoles(g: OrientationGeometry, s: ResolvedTreeSetti
       const wn = weight[i];
       for (let j = 0; j < muCount; j++) {
         const u1 = k1 * MU[j];
-        const t1 = u1 * s.alphaPar * ip2;
+        const t1 = u1 / s.alphaPar;
         const tt1 = t1 * t1;
-        const Q1 = u1 * u1 * ip2 + (k1 * k1 - u1 * u1) * iq2;
+        const Q1 = trueLengthSquared(k1, u1, ip2, iq2);
         const q1 = Math.sqrt(Q1);
         const v1 = t1 / Q1;
         const nn1 = t1 * v1;
@@ -97,12 +99,12 @@ export function distortedMultipoles(g: OrientationGeometry, s: ResolvedTreeSetti
         for (let ph = 0; ph < phiCount; ph++) {
           const u2 = A2 - bs2 * SC[j * phiCount + ph];
           const u3 = -u1 - u2;
-          const t2 = u2 * s.alphaPar * ip2;
+          const t2 = u2 / s.alphaPar;
           const t3 = -t1 - t2;
           const tt2 = t2 * t2;
           const tt3 = t3 * t3;
-          const Q2 = u2 * u2 * ip2 + (k2 * k2 - u2 * u2) * iq2;
-          const Q3 = u3 * u3 * ip2 + (k3 * k3 - u3 * u3) * iq2;
+          const Q2 = trueLengthSquared(k2, u2, ip2, iq2);
+          const Q3 = trueLengthSquared(k3, u3, ip2, iq2);
           const q2 = Math.sqrt(Q2);
           const q3 = Math.sqrt(Q3);
           const v2 = t2 / Q2;
@@ -146,13 +148,9 @@ export function distortedTemplates(g: OrientationGeometry, s: ResolvedTreeSettin
   const T = TREE_TEMPLATE_SIZE;
   const out = new Float64Array(binCount * nm * T);
   const power = sidePowerOf(s);
-  const ip2 = 1 / (s.alphaPar * s.alphaPar);
-  const iq2 = 1 / (s.alphaPerp * s.alphaPerp);
-  const vol = s.alphaPar * s.alphaPerp * s.alphaPerp;
-  const amp = 1 / (vol * vol);
+  const { ip2, iq2, amp } = dilation(s);
   const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
   const n1 = s.inverseDensity;
-  const v = new Float64Array(T);
   const perMu = new Float64Array(T);
   const acc = new Float64Array(nm * T);
   for (let bin = 0; bin < binCount; bin++) {
@@ -166,8 +164,8 @@ export function distortedTemplates(g: OrientationGeometry, s: ResolvedTreeSettin
       const wn = weight[i];
       for (let j = 0; j < muCount; j++) {
         const u1 = k1 * MU[j];
-        const t1 = u1 * s.alphaPar * ip2;
-        const Q1 = u1 * u1 * ip2 + (k1 * k1 - u1 * u1) * iq2;
+        const t1 = u1 / s.alphaPar;
+        const Q1 = trueLengthSquared(k1, u1, ip2, iq2);
         const q1 = Math.sqrt(Q1);
         const nu1 = t1 / q1;
         const P1 = power(Q1, t1 * t1, nu1 * nu1);
@@ -176,10 +174,10 @@ export function distortedTemplates(g: OrientationGeometry, s: ResolvedTreeSettin
         for (let ph = 0; ph < phiCount; ph++) {
           const u2 = A2 - bs2 * SC[j * phiCount + ph];
           const u3 = -u1 - u2;
-          const t2 = u2 * s.alphaPar * ip2;
+          const t2 = u2 / s.alphaPar;
           const t3 = -t1 - t2;
-          const Q2 = u2 * u2 * ip2 + (k2 * k2 - u2 * u2) * iq2;
-          const Q3 = u3 * u3 * ip2 + (k3 * k3 - u3 * u3) * iq2;
+          const Q2 = trueLengthSquared(k2, u2, ip2, iq2);
+          const Q3 = trueLengthSquared(k3, u3, ip2, iq2);
           const q2 = Math.sqrt(Q2);
           const q3 = Math.sqrt(Q3);
           const nu2 = t2 / q2;

@@ -9,6 +9,7 @@ import { distortedMultipoles, distortedTemplates, type OrientationGeometry } fro
 import { addPairTemplates } from './tree-template-integrand.js';
 import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
 import { checkWavenumbersInTable, resolveTreeSettings, type ResolvedTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
+import { directLoopConstants } from './tree-loop-constants.js';
 
 /**
  * Full evaluation of B_l — or of the averaged templates — on a fixed geometry
@@ -32,21 +33,12 @@ import { checkWavenumbersInTable, resolveTreeSettings, type ResolvedTreeSettings
  * Output layouts: B_l [multipole][bin] as combineTreeTemplates; templates
  * [bin][multipole][value] as the averagers.
  */
-export class TreeMultipoleEvaluator implements OrientationGeometry {
+export class TreeMultipoleEvaluator {
   readonly nodes: TriangleNodeSet;
   readonly multipoles: readonly number[];
   readonly rule: OrientationRule;
-  readonly multipoleCount: number;
-  readonly muCount: number;
-  readonly phiCount: number;
-  /** Per mu node: mu1, and weight (2l+1) L_l(mu1) of one phi point, [mu node][multipole]. */
-  readonly mu: Float64Array;
-  readonly muWeights: Float64Array;
-  /** Per orientation point: sqrt(1 - mu1^2) cos(phi), so that u2 = k2 (mu1 cos12 - sin12 this). */
-  readonly lineOfSightSide2: Float64Array;
-  /** Per node: cos and sin of the angle between sides 1 and 2. */
-  readonly cos12: Float64Array;
-  readonly sin12: Float64Array;
+  /** Mu nodes, their Legendre weights and the per-point and per-node angles of the product rule. */
+  private readonly geometry: OrientationGeometry;
   private readonly sidePowers: NodeSidePowers;
   /** Per node, pairs (12, 23, 31): F2, G2, sigma^2 — 9 values. */
   private readonly pairKernels: Float64Array;
@@ -59,20 +51,16 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
     this.rule = rule;
     const weights = multipoleWeights(rule, multipoles);
     const nm = multipoles.length;
-    this.multipoleCount = nm;
-    this.muCount = rule.muCount;
-    this.phiCount = rule.phiCount;
-    this.mu = new Float64Array(rule.muCount);
-    this.muWeights = new Float64Array(rule.muCount * nm);
+    const mu = new Float64Array(rule.muCount);
+    const muWeights = new Float64Array(rule.muCount * nm);
     for (let j = 0; j < rule.muCount; j++) {
-      this.mu[j] = rule.mu1[j * rule.phiCount];
-      for (let m = 0; m < nm; m++) this.muWeights[j * nm + m] = weights[j * rule.phiCount * nm + m];
+      mu[j] = rule.mu1[j * rule.phiCount];
+      for (let m = 0; m < nm; m++) muWeights[j * nm + m] = weights[j * rule.phiCount * nm + m];
     }
-    this.lineOfSightSide2 = rule.sinMu1.map((s, o) => s * rule.cosPhi[o]);
     this.sidePowers = new NodeSidePowers(nodes);
     const n = nodes.k1.length;
-    this.cos12 = new Float64Array(n);
-    this.sin12 = new Float64Array(n);
+    const cos12 = new Float64Array(n);
+    const sin12 = new Float64Array(n);
     this.pairKernels = new Float64Array(9 * n);
     let lo = Infinity;
     let hi = 0;
@@ -84,8 +72,8 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
         const c = k[(p + 2) % 3];
         const cab = Math.min(1, Math.max(-1, (c * c - a * a - b * b) / (2 * a * b)));
         if (p === 0) {
-          this.cos12[i] = cab;
-          this.sin12[i] = Math.sqrt(1 - cab * cab);
+          cos12[i] = cab;
+          sin12[i] = Math.sqrt(1 - cab * cab);
         }
         this.pairKernels[9 * i + 3 * p] = kernelF2(a, b, cab);
         this.pairKernels[9 * i + 3 * p + 1] = kernelG2(a, b, cab);
@@ -96,19 +84,30 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
     }
     this.kLo = lo;
     this.kHi = hi;
+    this.geometry = {
+      nodes,
+      multipoleCount: nm,
+      muCount: rule.muCount,
+      phiCount: rule.phiCount,
+      mu,
+      muWeights,
+      lineOfSightSide2: rule.sinMu1.map((v, o) => v * rule.cosPhi[o]),
+      cos12,
+      sin12,
+    };
   }
 
   /** B_l, layout [multipole][bin]; `tabulate` false uses the spectrum as given. */
   evaluate(settings: TreeBispectrumSettings | ResolvedTreeSettings, params: TreeBispectrumParameters, tabulate = true): Float64Array {
     const s = this.prepare(settings, tabulate);
-    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return distortedMultipoles(this, s, params);
+    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return distortedMultipoles(this.geometry, s, params);
     return this.undistorted(s, params);
   }
 
   /** Averaged templates [bin][multipole][value] (tree-template-terms.ts), as averaging TreeTemplateIntegrand. */
   templates(settings: TreeBispectrumSettings | ResolvedTreeSettings, tabulate = true): Float64Array {
     const s = this.prepare(settings, tabulate);
-    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return distortedTemplates(this, s);
+    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return distortedTemplates(this.geometry, s);
     return this.undistortedTemplates(s);
   }
 
@@ -127,7 +126,7 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
     const T = TREE_TEMPLATE_SIZE;
     const out = new Float64Array(binCount * nm * T);
     const { muCount, phiCount } = this.rule;
-    const { mu: MU, lineOfSightSide2: SC, muWeights: WMU } = this;
+    const { mu: MU, lineOfSightSide2: SC, muWeights: WMU, cos12: C12, sin12: S12 } = this.geometry;
     const { aIR, cIR } = this.dampingCoefficients(s);
     const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
     const n1 = s.inverseDensity;
@@ -145,8 +144,8 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
         const i1 = 1 / k1;
         const i2 = 1 / k2;
         const i3 = 1 / k3;
-        const a2 = k2 * this.cos12[i];
-        const b2 = k2 * this.sin12[i];
+        const a2 = k2 * C12[i];
+        const b2 = k2 * S12[i];
         const o9 = 9 * i;
         const wn = weight[i];
         for (let j = 0; j < muCount; j++) {
@@ -190,16 +189,9 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
     const nm = this.multipoles.length;
     const out = new Float64Array(binCount * nm);
     const { muCount, phiCount } = this.rule;
-    const { mu: MU, lineOfSightSide2: SC, muWeights: WMU } = this;
+    const { mu: MU, lineOfSightSide2: SC, muWeights: WMU, cos12: C12, sin12: S12 } = this.geometry;
     const { aIR, cIR } = this.dampingCoefficients(s);
-    const fog = s.velocityDispersion > 0;
-    const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
-    const n1 = s.inverseDensity;
-    const { b1, b2, bG2, f } = p;
-    const hb2 = 0.5 * b2;
-    const hf = 0.5 * f;
-    const stochConst = phiCount * p.bispShotConst * n1 * n1;
-    const stochP = p.bispShotPower * n1 * b1;
+    const { fog, halfSv2, b1, bG2, f, hb2, hf, stochConst, stochP } = directLoopConstants(s, p, phiCount);
     const { noWiggle: NW, wiggle: WG } = this.sidePowers.fill(s);
     const ix = this.sidePowers.index;
     const pk = this.pairKernels;
@@ -213,8 +205,8 @@ export class TreeMultipoleEvaluator implements OrientationGeometry {
         const ik1 = 1 / (k1 * k1);
         const ik2 = 1 / (k2 * k2);
         const ik3 = 1 / (k3 * k3);
-        const a2 = k2 * this.cos12[i];
-        const bs2 = k2 * this.sin12[i];
+        const a2 = k2 * C12[i];
+        const bs2 = k2 * S12[i];
         const o9 = 9 * i;
         // Orientation-independent parts of Z2 per pair: b1 F2 + b2/2 + bG2 sigma^2, and f G2.
         const c12 = b1 * pk[o9] + hb2 + bG2 * pk[o9 + 2];
