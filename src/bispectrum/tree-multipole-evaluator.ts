@@ -237,9 +237,9 @@ export class TreeMultipoleEvaluator {
           const A2 = a2 * m1;
           let det = 0;
           let lin = 0;
-          for (let ph = 0; ph < phiCount; ph++) {
+          for (let o = j * phiCount, end = o + phiCount; o < end; o++) {
             // LOS components u_i = k_i mu_i of the three sides; u1 + u2 + u3 = 0.
-            const u2 = A2 - bs2 * SC[j * phiCount + ph];
+            const u2 = A2 - bs2 * SC[o];
             const u3 = -u1 - u2;
             const v2 = u2 * ik2;
             const v3 = u3 * ik3;
