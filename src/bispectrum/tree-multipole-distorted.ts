@@ -90,14 +90,15 @@ export function distortedMultipoles(g: OrientationGeometry, s: ResolvedTreeSetti
         const tt1 = t1 * t1;
         const Q1 = trueLengthSquared(k1, u1, ip2, iq2);
         const q1 = Math.sqrt(Q1);
-        const v1 = t1 / Q1;
+        const r1 = 1 / q1;
+        const v1 = t1 * r1 * r1;
         const nn1 = t1 * v1;
         const z1 = b1 + f * nn1;
         const zP1 = z1 * power(Q1, tt1, nn1);
         const A2 = a2 * MU[j];
         let sum = stochConst;
-        for (let ph = 0; ph < phiCount; ph++) {
-          const u2 = A2 - bs2 * SC[j * phiCount + ph];
+        for (let o = j * phiCount, end = o + phiCount; o < end; o++) {
+          const u2 = A2 - bs2 * SC[o];
           const u3 = -u1 - u2;
           const t2 = u2 / s.alphaPar;
           const t3 = -t1 - t2;
@@ -107,8 +108,10 @@ export function distortedMultipoles(g: OrientationGeometry, s: ResolvedTreeSetti
           const Q3 = trueLengthSquared(k3, u3, ip2, iq2);
           const q2 = Math.sqrt(Q2);
           const q3 = Math.sqrt(Q3);
-          const v2 = t2 / Q2;
-          const v3 = t3 / Q3;
+          const r2 = 1 / q2;
+          const r3 = 1 / q3;
+          const v2 = t2 * r2 * r2;
+          const v3 = t3 * r3 * r3;
           const nn2 = t2 * v2;
           const nn3 = t3 * v3;
           const z2 = b1 + f * nn2;
@@ -117,9 +120,9 @@ export function distortedMultipoles(g: OrientationGeometry, s: ResolvedTreeSetti
           const zP3 = z3 * power(Q3, tt3, nn3);
           // True cosines between the sides of each pair (closed triangle) and ka/kb + kb/ka;
           // Z2 as kernels.ts with mu k = -t_c.
-          const i12 = 1 / (q1 * q2);
-          const i23 = 1 / (q2 * q3);
-          const i31 = 1 / (q3 * q1);
+          const i12 = r1 * r2;
+          const i23 = r2 * r3;
+          const i31 = r3 * r1;
           const c12 = 0.5 * (Q3 - Q1 - Q2) * i12;
           const c23 = 0.5 * (Q1 - Q2 - Q3) * i23;
           const c31 = 0.5 * (Q2 - Q3 - Q1) * i31;
@@ -167,12 +170,13 @@ export function distortedTemplates(g: OrientationGeometry, s: ResolvedTreeSettin
         const t1 = u1 / s.alphaPar;
         const Q1 = trueLengthSquared(k1, u1, ip2, iq2);
         const q1 = Math.sqrt(Q1);
-        const nu1 = t1 / q1;
+        const r1 = 1 / q1;
+        const nu1 = t1 * r1;
         const P1 = power(Q1, t1 * t1, nu1 * nu1);
         const A2 = a2 * MU[j];
         perMu.fill(0);
-        for (let ph = 0; ph < phiCount; ph++) {
-          const u2 = A2 - bs2 * SC[j * phiCount + ph];
+        for (let o = j * phiCount, end = o + phiCount; o < end; o++) {
+          const u2 = A2 - bs2 * SC[o];
           const u3 = -u1 - u2;
           const t2 = u2 / s.alphaPar;
           const t3 = -t1 - t2;
@@ -180,23 +184,25 @@ export function distortedTemplates(g: OrientationGeometry, s: ResolvedTreeSettin
           const Q3 = trueLengthSquared(k3, u3, ip2, iq2);
           const q2 = Math.sqrt(Q2);
           const q3 = Math.sqrt(Q3);
-          const nu2 = t2 / q2;
-          const nu3 = t3 / q3;
+          const r2 = 1 / q2;
+          const r3 = 1 / q3;
+          const nu2 = t2 * r2;
+          const nu3 = t3 * r3;
           const P2 = power(Q2, t2 * t2, nu2 * nu2);
           const P3 = power(Q3, t3 * t3, nu3 * nu3);
           const damp = halfSv2 > 0 ? expNegative(halfSv2 * (t1 * t1 + t2 * t2 + t3 * t3)) : 1;
-          const i12 = 1 / (q1 * q2);
-          const i23 = 1 / (q2 * q3);
-          const i31 = 1 / (q3 * q1);
+          const i12 = r1 * r2;
+          const i23 = r2 * r3;
+          const i31 = r3 * r1;
           const c12 = 0.5 * (Q3 - Q1 - Q2) * i12;
           const c23 = 0.5 * (Q1 - Q2 - Q3) * i23;
           const c31 = 0.5 * (Q2 - Q3 - Q1) * i31;
           const r12 = (Q1 + Q2) * i12;
           const r23 = (Q2 + Q3) * i23;
           const r31 = (Q3 + Q1) * i31;
-          addPairTemplates(perMu, 0, 2 * damp * P1 * P2, -t3, 1 / q1, 1 / q2, nu1, nu2, nu3, kernelF2FromRatios(c12, r12), kernelG2FromRatios(c12, r12), kernelGalileonTidal(c12));
-          addPairTemplates(perMu, 0, 2 * damp * P2 * P3, -t1, 1 / q2, 1 / q3, nu2, nu3, nu1, kernelF2FromRatios(c23, r23), kernelG2FromRatios(c23, r23), kernelGalileonTidal(c23));
-          addPairTemplates(perMu, 0, 2 * damp * P3 * P1, -t2, 1 / q3, 1 / q1, nu3, nu1, nu2, kernelF2FromRatios(c31, r31), kernelG2FromRatios(c31, r31), kernelGalileonTidal(c31));
+          addPairTemplates(perMu, 0, 2 * damp * P1 * P2, -t3, r1, r2, nu1, nu2, nu3, kernelF2FromRatios(c12, r12), kernelG2FromRatios(c12, r12), kernelGalileonTidal(c12));
+          addPairTemplates(perMu, 0, 2 * damp * P2 * P3, -t1, r2, r3, nu2, nu3, nu1, kernelF2FromRatios(c23, r23), kernelG2FromRatios(c23, r23), kernelGalileonTidal(c23));
+          addPairTemplates(perMu, 0, 2 * damp * P3 * P1, -t2, r3, r1, nu3, nu1, nu2, kernelF2FromRatios(c31, r31), kernelG2FromRatios(c31, r31), kernelGalileonTidal(c31));
           perMu[14] += n1 * (P1 + P2 + P3);
           perMu[15] += n1 * (nu1 * nu1 * P1 + nu2 * nu2 * P2 + nu3 * nu3 * P3);
           perMu[16] += n1 * n1;
