@@ -8,7 +8,9 @@ import type { TreeBispectrumParameters } from './tree-template-terms.js';
 import { distortedMultipoles, distortedTemplates, type OrientationGeometry } from './tree-multipole-distorted.js';
 import { addPairTemplates } from './tree-template-integrand.js';
 import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
-import { checkWavenumbersInTable, resolveTreeSettings, type ResolvedTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
+import { checkWavenumbersInTable, isOrientationPolynomial, resolveTreeSettings, type ResolvedTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
+import { TreeAngularMoments } from './tree-angular-moments.js';
+import { combineTreeTemplates } from './tree-template-combination.js';
 import { directLoopConstants } from './tree-loop-constants.js';
 
 /**
@@ -40,6 +42,7 @@ export class TreeMultipoleEvaluator {
   /** Mu nodes, their Legendre weights and the per-point and per-node angles of the product rule. */
   private readonly geometry: OrientationGeometry;
   private readonly sidePowers: NodeSidePowers;
+  private moments: TreeAngularMoments | undefined;
   /** Per node, pairs (12, 23, 31): F2, G2, sigma^2 — 9 values. */
   private readonly pairKernels: Float64Array;
   private readonly kLo: number;
@@ -101,6 +104,7 @@ export class TreeMultipoleEvaluator {
   evaluate(settings: TreeBispectrumSettings | ResolvedTreeSettings, params: TreeBispectrumParameters, tabulate = true): Float64Array {
     const s = this.prepare(settings, tabulate);
     if (s.alphaPar !== 1 || s.alphaPerp !== 1) return distortedMultipoles(this.geometry, s, params);
+    if (isOrientationPolynomial(s)) return combineTreeTemplates(this.angularMoments().templates(s, this.sidePowers), this.multipoles.length, params);
     return this.undistorted(s, params);
   }
 
@@ -108,7 +112,14 @@ export class TreeMultipoleEvaluator {
   templates(settings: TreeBispectrumSettings | ResolvedTreeSettings, tabulate = true): Float64Array {
     const s = this.prepare(settings, tabulate);
     if (s.alphaPar !== 1 || s.alphaPerp !== 1) return distortedTemplates(this.geometry, s);
+    if (isOrientationPolynomial(s)) return this.angularMoments().templates(s, this.sidePowers);
     return this.undistortedTemplates(s);
+  }
+
+  /** The per-node angular averages of the polynomial model, built on first use (tree-angular-moments.ts). */
+  angularMoments(): TreeAngularMoments {
+    this.moments ??= new TreeAngularMoments(this.geometry, this.pairKernels);
+    return this.moments;
   }
 
   private prepare(settings: TreeBispectrumSettings | ResolvedTreeSettings, tabulate: boolean): ResolvedTreeSettings {

@@ -1,5 +1,6 @@
 import type { LinearSpectrum } from '../contracts/linear-spectrum.js';
 import { InputError } from '../contracts/input-error.js';
+import { AngleAveragedIrSpectrum } from '../perturbation/angle-averaged-ir-spectrum.js';
 
 /**
  * Everything the tree-level bispectrum holds fixed while the bias, growth-rate
@@ -9,6 +10,14 @@ export interface TreeBispectrumSettings {
   readonly spectrum: LinearSpectrum;
   /** Damp the BAO wiggles of every P entering B (leading-order IR resummation). Default true. */
   readonly irResummation?: boolean;
+  /**
+   * With IR resummation, damp each P's wiggles by the line-of-sight average of
+   * exp(-k^2 Sigma_tot^2(mu)) instead of its value at the P's own mu: an
+   * approximation (docs/bispectrum-convergence.md) that makes the model a
+   * polynomial in the cosines, so that precomputed angular averages apply.
+   * Default false.
+   */
+  readonly irAngleAveraged?: boolean;
   /** Growth rate inside the BAO damping Sigma_tot^2(mu); default the spectrum's large-scale f. */
   readonly fForBaoDamping?: number;
   /** Velocity dispersion sigma_v of the fingers-of-god damping, Mpc/h; default 0 (off). */
@@ -24,6 +33,8 @@ export interface TreeBispectrumSettings {
 export interface ResolvedTreeSettings {
   readonly spectrum: LinearSpectrum;
   readonly irResummation: boolean;
+  /** The spectrum carries the angle-averaged damping (AngleAveragedIrSpectrum); irResummation is then false. */
+  readonly irAngleAveraged: boolean;
   readonly fForBaoDamping: number;
   readonly velocityDispersion: number;
   readonly alphaPar: number;
@@ -52,9 +63,12 @@ export function resolveTreeSettings(s: TreeBispectrumSettings): ResolvedTreeSett
   }
   const fDamp = s.fForBaoDamping ?? s.spectrum.growthRateLargeScale;
   if (!Number.isFinite(fDamp) || fDamp < 0) throw new InputError(`bispectrum settings: fForBaoDamping must be >= 0, got ${fDamp}`);
+  const ir = s.irResummation ?? true;
+  const averaged = ir && s.irAngleAveraged === true;
   return {
-    spectrum: s.spectrum,
-    irResummation: s.irResummation ?? true,
+    spectrum: averaged ? new AngleAveragedIrSpectrum(s.spectrum, fDamp) : s.spectrum,
+    irResummation: ir && !averaged,
+    irAngleAveraged: averaged,
     fForBaoDamping: fDamp,
     velocityDispersion: sigma,
     alphaPar: positive('alphaPar', s.alphaPar, 1),

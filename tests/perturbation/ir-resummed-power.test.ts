@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { baoDampingSigma2, irResummedPower } from '../../src/perturbation/ir-resummed-power.js';
+import { angleAveragedBaoDamping, baoDampingSigma2, irResummedPower } from '../../src/perturbation/ir-resummed-power.js';
 import { analyticSpectrum } from '../bispectrum/support/analytic-spectrum.js';
 
 describe('IR-resummed power', () => {
@@ -17,5 +17,24 @@ describe('IR-resummed power', () => {
     const pw = s.power(k) - s.powerNoWiggle(k);
     expect((irResummedPower(s, k, 0, f) - s.powerNoWiggle(k)) / (Math.exp(-k * k * s.sigma2BAO) * pw)).toBeCloseTo(1, 12);
     expect(Math.abs(pw) / s.power(k)).toBeGreaterThan(1e-2);
+  });
+
+  it('averages the damping over the line of sight: 24-point rule = 4000-interval composite Simpson to 1e-13; 1 when Sigma = 0 (common practice: the mean of the factor)', () => {
+    const s = analyticSpectrum({ wiggle: 0.05 });
+    for (const f of [0, 0.8, 1.2]) {
+      for (const k of [0.02, 0.15, 0.3]) {
+        const n = 4000;
+        let simpson = 0;
+        for (let i = 0; i <= n; i++) {
+          const w = i === 0 || i === n ? 1 : i % 2 === 1 ? 4 : 2;
+          simpson += w * Math.exp(-k * k * baoDampingSigma2(s, f, i / n));
+        }
+        simpson /= 3 * n;
+        expect(k * k * baoDampingSigma2(s, f, 1)).toBeLessThan(20);
+        expect(Math.abs(angleAveragedBaoDamping(s, f, k) / simpson - 1)).toBeLessThan(1e-13);
+      }
+    }
+    const undamped = { ...s, sigma2BAO: 0, deltaSigma2BAO: 0 };
+    expect(angleAveragedBaoDamping(undamped, 0.8, 0.2)).toBeCloseTo(1, 14);
   });
 });

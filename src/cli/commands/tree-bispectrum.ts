@@ -25,6 +25,7 @@ interface TreeBispectrumOptions {
   ell: string;
   sigmaV: string;
   ir: boolean;
+  irAveraged?: boolean;
   set: string[];
   out?: string;
 }
@@ -52,6 +53,7 @@ export function registerTreeBispectrum(program: Command): void {
     .option('--ell <list>', 'even multipoles, comma separated', '0,2')
     .option('--sigma-v <Mpc/h>', 'velocity dispersion of the fingers-of-god damping', '0')
     .option('--no-ir', 'switch off the IR resummation of the BAO wiggles')
+    .option('--ir-averaged', 'damp the wiggles of each P by the line-of-sight average of the IR damping (an approximation; faster)')
     .option('--set <name=value...>', `model parameters (${TREE_BISPECTRUM_PARAMETERS.join(', ')})`, [])
     .option('--out <file>', 'write the CSV here instead of standard output')
     .action(
@@ -60,6 +62,7 @@ export function registerTreeBispectrum(program: Command): void {
         const common = {
           spectrum,
           irResummation: opts.ir,
+          irAngleAveraged: opts.irAveraged === true,
           velocityDispersion: numberOption('sigma-v', opts.sigmaV),
           multipoles: opts.ell.split(',').map((s) => numberOption('ell', s)),
           ...(opts.nbar === undefined ? {} : { numberDensity: numberOption('nbar', opts.nbar) }),

@@ -18,7 +18,8 @@ export interface BundleModelOptions {
   readonly bispectrum?: {
     readonly averaging?: BinAveragingMethod;
     readonly volumeOrder?: number;
-    readonly irResummation?: boolean;
+    /** true (default): damping of each P at its own angle to the line of sight; "angle-averaged": its average over the angle. */
+    readonly irResummation?: boolean | 'angle-averaged';
     readonly velocityDispersion?: number;
     /** Cache folder of discrete-box averages (averaging "box" uses the bundle's boxSize). */
     readonly latticeCacheDir?: string;
@@ -57,7 +58,8 @@ export function bundleModels(bundle: MeasurementBundle, options: BundleModelOpti
           numberDensity: metadata.numberDensity,
           averaging: b.averaging,
           volumeOrder: b.volumeOrder,
-          irResummation: b.irResummation,
+          irResummation: b.irResummation === undefined ? undefined : b.irResummation !== false,
+          irAngleAveraged: b.irResummation === 'angle-averaged',
           velocityDispersion: b.velocityDispersion,
           boxSize: metadata.boxSize,
           latticeCacheDir: b.latticeCacheDir,

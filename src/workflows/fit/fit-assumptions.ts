@@ -1,4 +1,5 @@
 import type { JointLikelihood } from '../../inference/likelihood/joint-likelihood.js';
+import { describeBispectrumModel } from './model-options.js';
 import type { RunConfig } from './run-config.js';
 
 /**
@@ -11,16 +12,15 @@ export interface Assumption {
   readonly value: string;
 }
 
-export const MODEL_ORDER =
-  'P_l: linear redshift-space (Kaiser) power with leading-order IR resummation of the BAO, k^2 mu^2n P counterterms and stochastic terms — no one-loop terms; ' +
-  'B_l: tree level (F2, G2 kernels; bias b1, b2, bG2) with stochastic terms and IR resummation in each P';
+const POWER_MODEL =
+  'P_l: linear redshift-space (Kaiser) power with leading-order IR resummation of the BAO, k^2 mu^2n P counterterms and stochastic terms — no one-loop terms';
 
 export function fitAssumptions(config: RunConfig, likelihood: JointLikelihood): Assumption[] {
   const d = likelihood.describe();
   const cuts = config.likelihood.cuts ? JSON.stringify(config.likelihood.cuts) : 'none (all bins of the bundle)';
   const s = config.sampler;
   const out: Assumption[] = [
-    { key: 'model order', value: MODEL_ORDER },
+    { key: 'model order', value: `${POWER_MODEL}; ${describeBispectrumModel(config.likelihood.models)}` },
     { key: 'scale cuts', value: `${cuts}; kept per block: ${d.blocks}` },
     { key: 'covariance', value: String(d.covariance) },
     { key: 'likelihood', value: `${d.likelihood}, ${d.dataPoints} data points` },

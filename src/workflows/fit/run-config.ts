@@ -9,6 +9,7 @@ import type { JointLikelihoodOptions } from '../../inference/likelihood/joint-li
 import { PROVIDED_QUANTITIES } from '../../inference/likelihood/model-source.js';
 import { ParameterSpace } from '../../inference/parameters/parameter-space.js';
 import { parseJsonWithLines, type JsonWithLines } from '../../io/json-with-lines.js';
+import { checkBispectrumModelOptions } from './model-options.js';
 
 /**
  * The run config of a joint fit (JSON; layout in docs/run-config.md). Every
@@ -188,6 +189,7 @@ export function readRunConfig(path: string): RunConfig {
   }
   if (c.parameters !== undefined) collect(problems, '', () => new ParameterSpace(c.parameters as never, mode === 'full' || mode === 'fixed-template' ? PROVIDED_QUANTITIES[mode] : []));
   if (c.models !== undefined && !isObject(c.models)) problems.push(`${at('models')}: must be an object { power?, bispectrum? }`);
+  checkBispectrumModelOptions(c.models, at, problems);
   if (c.covarianceFiducial !== undefined) {
     if (!isObject(c.covarianceFiducial)) problems.push(`${at('covarianceFiducial')}: must be an object of named values`);
     else for (const [k, v] of Object.entries(c.covarianceFiducial)) if (typeof v !== 'number' || !Number.isFinite(v)) problems.push(`${at(`covarianceFiducial.${k}`)}: must be a finite number`);

@@ -54,6 +54,22 @@ describe('run config validation', () => {
     expect(problems.length).toBeGreaterThanOrEqual(7);
   });
 
+  it('checks the bispectrum model block: unknown keys and values of the wrong kind, with their lines', () => {
+    const text = `{
+  "measurement": "${demo.replace(/\\/g, '/')}",
+  "covariance": { "source": "matrix" },
+  "cosmology": { "mode": "fixed-template" },
+  "parameters": {},
+  "models": { "bispectrum": { "irResummation": "yes",
+    "volumeOrder": 0, "averaging": "middle", "shape": 1 } }
+}`;
+    const problems = problemsOf(text).join('\n');
+    expect(problems).toMatch(/models\.bispectrum\.irResummation \(.*c\.json:6\): must be true, false or "angle-averaged", got "yes"/);
+    expect(problems).toMatch(/models\.bispectrum\.volumeOrder \(.*c\.json:7\): must be a positive integer/);
+    expect(problems).toMatch(/models\.bispectrum\.averaging \(.*c\.json:7\): must be one of/);
+    expect(problems).toMatch(/models\.bispectrum\.shape \(.*c\.json:7\): unknown key/);
+  });
+
   it('refuses a parameter written twice (once fixed, once free) and a missing measurement folder', () => {
     const dup = problemsOf('{\n"parameters": {\n "b1": {"value": 1},\n "b1": {"prior": {"kind": "uniform", "min": 0, "max": 3}}\n}\n}');
     expect(dup.join('\n')).toMatch(/key "parameters\.b1" appears twice/);
