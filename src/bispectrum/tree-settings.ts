@@ -1,6 +1,6 @@
 import type { LinearSpectrum } from '../contracts/linear-spectrum.js';
 import { InputError } from '../contracts/input-error.js';
-import { AngleAveragedIrSpectrum } from '../perturbation/angle-averaged-ir-spectrum.js';
+import { angleAveragedIrSpectrum } from '../perturbation/angle-averaged-ir-spectrum.js';
 
 /**
  * Everything the tree-level bispectrum holds fixed while the bias, growth-rate
@@ -33,7 +33,7 @@ export interface TreeBispectrumSettings {
 export interface ResolvedTreeSettings {
   readonly spectrum: LinearSpectrum;
   readonly irResummation: boolean;
-  /** The spectrum carries the angle-averaged damping (AngleAveragedIrSpectrum); irResummation is then false. */
+  /** The spectrum carries the angle-averaged damping (angle-averaged-ir-spectrum.ts); irResummation is then false. */
   readonly irAngleAveraged: boolean;
   readonly fForBaoDamping: number;
   readonly velocityDispersion: number;
@@ -66,7 +66,7 @@ export function resolveTreeSettings(s: TreeBispectrumSettings): ResolvedTreeSett
   const ir = s.irResummation ?? true;
   const averaged = ir && s.irAngleAveraged === true;
   return {
-    spectrum: averaged ? new AngleAveragedIrSpectrum(s.spectrum, fDamp) : s.spectrum,
+    spectrum: averaged ? angleAveragedIrSpectrum(s.spectrum, fDamp) : s.spectrum,
     irResummation: ir && !averaged,
     irAngleAveraged: averaged,
     fForBaoDamping: fDamp,

@@ -29,3 +29,19 @@ export interface LinearSpectrum {
   /** sigma8 of the traced field at this redshift. */
   readonly sigma8: number;
 }
+
+/** A spectrum with the redshift, range, growth, BAO scales and sigma8 of `source` and new power functions. */
+export function withPowerOf(source: LinearSpectrum, power: (k: number) => number, powerNoWiggle: (k: number) => number): LinearSpectrum {
+  return {
+    redshift: source.redshift,
+    kMin: source.kMin,
+    kMax: source.kMax,
+    power,
+    powerNoWiggle,
+    growthRate: (k) => source.growthRate(k),
+    growthRateLargeScale: source.growthRateLargeScale,
+    sigma2BAO: source.sigma2BAO,
+    deltaSigma2BAO: source.deltaSigma2BAO,
+    sigma8: source.sigma8,
+  };
+}

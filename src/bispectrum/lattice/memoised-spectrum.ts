@@ -1,4 +1,4 @@
-import type { LinearSpectrum } from '../../contracts/linear-spectrum.js';
+import { withPowerOf, type LinearSpectrum } from '../../contracts/linear-spectrum.js';
 
 /**
  * A LinearSpectrum for integrands evaluated on the lattice of a box of side L:
@@ -42,16 +42,9 @@ export function latticeMemoisedSpectrum(spectrum: LinearSpectrum, boxSize: numbe
       return v;
     };
   };
-  return {
-    redshift: spectrum.redshift,
-    kMin: spectrum.kMin,
-    kMax: spectrum.kMax,
-    power: memo((k) => spectrum.power(k)),
-    powerNoWiggle: memo((k) => spectrum.powerNoWiggle(k)),
-    growthRate: (k) => spectrum.growthRate(k),
-    growthRateLargeScale: spectrum.growthRateLargeScale,
-    sigma2BAO: spectrum.sigma2BAO,
-    deltaSigma2BAO: spectrum.deltaSigma2BAO,
-    sigma8: spectrum.sigma8,
-  };
+  return withPowerOf(
+    spectrum,
+    memo((k) => spectrum.power(k)),
+    memo((k) => spectrum.powerNoWiggle(k)),
+  );
 }
