@@ -32,6 +32,10 @@ import { directLoopConstants } from './tree-loop-constants.js';
  * applied once per mu node to the sum over phi.
  * With AP distortion the true wavenumbers change with orientation and the loops
  * of tree-multipole-distorted.ts look the spectrum up per orientation point.
+ * When no P depends on its angle (isOrientationPolynomial: no IR damping left
+ * in the loop — IR off or angle-averaged —, no fingers-of-god damping, no AP)
+ * the orientation averages are precomputed per node instead
+ * (tree-angular-moments.ts, built on first use).
  * Output layouts: B_l [multipole][bin] as combineTreeTemplates; templates
  * [bin][multipole][value] as the averagers.
  */
