@@ -1,5 +1,4 @@
 import { expNegative } from '../numerics/fast-exp.js';
-import { SplineStencil } from '../numerics/spline-stencil.js';
 import { TabulatedSpectrum } from './tabulated-spectrum.js';
 import type { ResolvedTreeSettings } from './tree-settings.js';
 import type { TriangleNodeSet } from './triangle-node-set.js';
@@ -13,16 +12,13 @@ import type { TriangleNodeSet } from './triangle-node-set.js';
  * Gauss–Legendre nodes: 89 217 sides take 5 457 distinct values for the
  * 477-bin binning, 707 970 take 10 530 for the 6 613-bin one), so the power is
  * computed once per distinct length: `index[3 node + side]` points into the
- * returned arrays, which the next call overwrites. On a TabulatedSpectrum the
- * lookups go through a SplineStencil kept for as long as the table's grid
- * stays the same (the grid depends only on the k range).
+ * returned arrays, which the next call overwrites.
  */
 export class NodeSidePowers {
   readonly index: Int32Array;
   private readonly k: Float64Array;
   private readonly noWiggle: Float64Array;
   private readonly wiggle: Float64Array;
-  private stencil: SplineStencil | undefined;
 
   constructor(nodes: TriangleNodeSet) {
     const n = nodes.k1.length;
@@ -55,15 +51,10 @@ export class NodeSidePowers {
   fill(s: ResolvedTreeSettings): { noWiggle: Float64Array; wiggle: Float64Array } {
     const { k, noWiggle: nw, wiggle: w } = this;
     const sp = s.spectrum;
-    if (sp instanceof TabulatedSpectrum) {
-      if (!this.stencil?.fits(sp.noWiggle)) this.stencil = new SplineStencil(sp.noWiggle, k);
-      this.stencil.apply(sp.noWiggle, nw);
-      this.stencil.apply(sp.wiggle, w);
-    } else {
-      for (let p = 0; p < k.length; p++) {
-        nw[p] = sp.powerNoWiggle(k[p]);
-        w[p] = sp.power(k[p]) - nw[p];
-      }
+    const tab = sp instanceof TabulatedSpectrum ? sp : undefined;
+    for (let p = 0; p < k.length; p++) {
+      nw[p] = sp.powerNoWiggle(k[p]);
+      w[p] = tab ? tab.powerWiggle(k[p]) : sp.power(k[p]) - nw[p];
     }
     if (s.irResummation) {
       const sigma2 = sp.sigma2BAO;

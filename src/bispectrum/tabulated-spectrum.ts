@@ -22,9 +22,8 @@ export class TabulatedSpectrum implements LinearSpectrum {
   readonly sigma2BAO: number;
   readonly deltaSigma2BAO: number;
   readonly sigma8: number;
-  /** The splines of P_nw and P_w (one grid), for SplineStencil lookups. */
-  readonly noWiggle: CubicSpline;
-  readonly wiggle: CubicSpline;
+  private readonly noWiggle: CubicSpline;
+  private readonly wiggle: CubicSpline;
   private readonly pair: SharedGridSplines;
   private readonly source: LinearSpectrum;
 

@@ -19,7 +19,7 @@ import { directLoopConstants } from './tree-loop-constants.js';
  * averages of TreeDirectIntegrand and TreeTemplateIntegrand made fast.
  * Geometry that does not depend on cosmology (cosines between the sides, F2, G2
  * and sigma^2 of each pair at each node, Legendre weights per mu node, the
- * spline stencil of the side wavenumbers) is built once. Per evaluation the
+ * distinct side lengths) is built once. Per evaluation the
  * spectrum is re-tabulated (TabulatedSpectrum) and, without AP distortion,
  * P_nw and the damped-at-mu=0 wiggle of each side are looked up once per node
  * (NodeSidePowers); the orientation loop works with the line-of-sight

@@ -1,4 +1,5 @@
 import { InputErrors } from '../contracts/input-error.js';
+import { isJsonObject, type JsonObject } from '../io/json-with-lines.js';
 
 /**
  * The JSON metadata of a measurement bundle (file `measurement.json` in the
@@ -36,14 +37,12 @@ export interface BundleMetadata {
 export const BUNDLE_FORMAT = 'treble-measurement-1';
 export const BUNDLE_METADATA_FILE = 'measurement.json';
 
-type Json = Record<string, unknown>;
-const isObject = (v: unknown): v is Json => typeof v === 'object' && v !== null && !Array.isArray(v);
 
 /** Validate parsed JSON; every problem is collected and named by its key. */
 export function validateBundleMetadata(json: unknown, file = BUNDLE_METADATA_FILE): BundleMetadata {
   const problems: string[] = [];
   const bad = (key: string, why: string) => problems.push(`${file}: ${key} ${why}`);
-  if (!isObject(json)) throw new InputErrors([`${file}: the metadata must be a JSON object`]);
+  if (!isJsonObject(json)) throw new InputErrors([`${file}: the metadata must be a JSON object`]);
   const known = new Set(['format', 'redshift', 'numberDensity', 'lineOfSight', 'boxSize', 'surveyVolume', 'fiducialCosmology', 'power', 'bispectrum', 'covarianceMatrix', 'realisations', 'description']);
   for (const key of Object.keys(json)) if (!known.has(key)) bad(key, 'is not a known key');
   if (json.format !== BUNDLE_FORMAT) bad('format', `must be "${BUNDLE_FORMAT}", got ${JSON.stringify(json.format)}`);
@@ -83,7 +82,7 @@ export function validateBundleMetadata(json: unknown, file = BUNDLE_METADATA_FIL
   }
 
   const fiducialCosmology: Record<string, number> = {};
-  if (!isObject(json.fiducialCosmology) || Object.keys(json.fiducialCosmology).length === 0) {
+  if (!isJsonObject(json.fiducialCosmology) || Object.keys(json.fiducialCosmology).length === 0) {
     bad('fiducialCosmology', 'must be an object of named numbers (the cosmology that turned redshifts into distances)');
   } else {
     for (const [k, v] of Object.entries(json.fiducialCosmology)) fiducialCosmology[k] = num(`fiducialCosmology.${k}`, v, () => true, 'a finite number');
@@ -92,7 +91,7 @@ export function validateBundleMetadata(json: unknown, file = BUNDLE_METADATA_FIL
   const statistic = (key: 'power' | 'bispectrum'): StatisticFiles | undefined => {
     const v = json[key];
     if (v === undefined) return undefined;
-    if (!isObject(v)) {
+    if (!isJsonObject(v)) {
       bad(key, 'must be an object { "table": file, "dk": width }');
       return undefined;
     }
@@ -109,7 +108,7 @@ export function validateBundleMetadata(json: unknown, file = BUNDLE_METADATA_FIL
   const covarianceMatrix = str('covarianceMatrix', json.covarianceMatrix);
   let realisations: BundleMetadata['realisations'];
   if (json.realisations !== undefined) {
-    if (!isObject(json.realisations)) bad('realisations', 'must be an object { "power": folder, "bispectrum": folder }');
+    if (!isJsonObject(json.realisations)) bad('realisations', 'must be an object { "power": folder, "bispectrum": folder }');
     else {
       const r = json.realisations;
       for (const k of Object.keys(r)) if (k !== 'power' && k !== 'bispectrum') bad(`realisations.${k}`, 'is not a known key');

@@ -144,3 +144,10 @@ export function parseJsonWithLines(text: string, file: string): JsonWithLines {
     where: (path) => (lines.has(path) ? `${file}:${lines.get(path)}` : file),
   };
 }
+
+/** A parsed JSON object (not an array, not null). */
+export type JsonObject = Record<string, unknown>;
+
+export function isJsonObject(v: unknown): v is JsonObject {
+  return typeof v === 'object' && v !== null && !Array.isArray(v);
+}

@@ -10,6 +10,7 @@ import type { Mesh } from './mesh.js';
 import { checkMesh } from './mesh.js';
 import { secondOrderGalaxySpectrum } from './second-order-field.js';
 import { addWhiteNoise, poissonSampledSpectrum } from './stochastic-field.js';
+import { isJsonObject, type JsonObject } from '../io/json-with-lines.js';
 
 /**
  * A mock box described in JSON:
@@ -30,11 +31,9 @@ export interface MockRecipe {
   readonly noise: { readonly kind: 'gaussian' | 'poisson'; readonly numberDensity: number } | undefined;
 }
 
-type Json = Record<string, unknown>;
-const isObject = (v: unknown): v is Json => typeof v === 'object' && v !== null && !Array.isArray(v);
 
 export function validateMockRecipe(json: unknown, file: string): MockRecipe {
-  if (!isObject(json)) throw new InputError(`${file}: the mock recipe must be a JSON object`);
+  if (!isJsonObject(json)) throw new InputError(`${file}: the mock recipe must be a JSON object`);
   const problems: string[] = [];
   const known = new Set(['mesh', 'redshift', 'cosmology', 'seed', 'order', 'bias', 'growthRate', 'noise']);
   for (const k of Object.keys(json)) if (!known.has(k)) problems.push(`${file}: ${k} is not a known key (${[...known].join(', ')})`);
@@ -42,23 +41,23 @@ export function validateMockRecipe(json: unknown, file: string): MockRecipe {
     if (typeof v !== 'number' || !Number.isFinite(v) || !ok(v)) problems.push(`${file}: ${key} must be ${what}, got ${JSON.stringify(v)}`);
     return Number(v);
   };
-  const mesh = isObject(json.mesh) ? json.mesh : {};
-  if (!isObject(json.mesh)) problems.push(`${file}: mesh must be an object { n, boxSize }`);
+  const mesh = isJsonObject(json.mesh) ? json.mesh : {};
+  if (!isJsonObject(json.mesh)) problems.push(`${file}: mesh must be an object { n, boxSize }`);
   const n = num('mesh.n', mesh.n, (x) => Number.isInteger(x) && x >= 4 && (x & (x - 1)) === 0, 'a power of two >= 4');
   const boxSize = num('mesh.boxSize', mesh.boxSize, (x) => x > 0, 'a positive length in Mpc/h');
   const redshift = num('redshift', json.redshift, (x) => x >= 0, 'a number >= 0');
   const seed = num('seed', json.seed, (x) => Number.isInteger(x), 'an integer');
   const order = json.order ?? 'linear';
   if (order !== 'linear' && order !== 'second' && order !== '2lpt') problems.push(`${file}: order must be "linear", "second" or "2lpt", got ${JSON.stringify(order)}`);
-  const bias = isObject(json.bias) ? json.bias : {};
-  if (!isObject(json.bias)) problems.push(`${file}: bias must be an object { b1, b2, bG2 }`);
+  const bias = isJsonObject(json.bias) ? json.bias : {};
+  if (!isJsonObject(json.bias)) problems.push(`${file}: bias must be an object { b1, b2, bG2 }`);
   const b1 = num('bias.b1', bias.b1, () => true, 'a number');
   const b2 = num('bias.b2', bias.b2 ?? 0, () => true, 'a number');
   const bG2 = num('bias.bG2', bias.bG2 ?? 0, () => true, 'a number');
   const growthRate = json.growthRate === undefined ? undefined : num('growthRate', json.growthRate, (x) => x >= 0, 'a number >= 0');
   let noise: MockRecipe['noise'];
   if (json.noise !== undefined) {
-    const nz = isObject(json.noise) ? json.noise : {};
+    const nz = isJsonObject(json.noise) ? json.noise : {};
     if (nz.kind !== 'gaussian' && nz.kind !== 'poisson') problems.push(`${file}: noise.kind must be "gaussian" or "poisson", got ${JSON.stringify(nz.kind)}`);
     const numberDensity = num('noise.numberDensity', nz.numberDensity, (x) => x > 0, 'a positive number in (h/Mpc)^3');
     noise = { kind: nz.kind as 'gaussian' | 'poisson', numberDensity };

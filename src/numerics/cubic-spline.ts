@@ -52,8 +52,8 @@ export class CubicSpline {
     this.slope1 = this.derivative(this.x1);
   }
 
-  /** Index i with x[i] <= t < x[i+1], clamped to [0, n-2]: the interval `at` uses. */
-  interval(t: number): number {
+  /** Index i with x[i] <= t < x[i+1], clamped to [0, n-2]. */
+  private interval(t: number): number {
     const n = this.x.length;
     if (this.uniformStep > 0) {
       let i = Math.floor((t - this.x0) / this.uniformStep);

@@ -5,5 +5,4 @@ export * from './cubic-spline.js';
 export * from './lattice-shell.js';
 export * from './fft-3d.js';
 export * from './spherical-bessel-low-order.js';
-export * from './spline-stencil.js';
 export * from './fast-exp.js';

@@ -1,8 +1,7 @@
 import { BIN_AVERAGING_METHODS } from '../../bispectrum/tree-bispectrum-model.js';
 import type { BundleModelOptions } from '../../inference/likelihood/bundle-models.js';
+import { isJsonObject, type JsonObject } from '../../io/json-with-lines.js';
 
-type Json = Record<string, unknown>;
-const isObject = (v: unknown): v is Json => typeof v === 'object' && v !== null && !Array.isArray(v);
 
 const BISPECTRUM_KEYS = ['averaging', 'volumeOrder', 'irResummation', 'velocityDispersion', 'latticeCacheDir'];
 
@@ -11,9 +10,9 @@ const BISPECTRUM_KEYS = ['averaging', 'volumeOrder', 'irResummation', 'velocityD
  * keys, and values of the right kind, each problem with its key and line.
  */
 export function checkBispectrumModelOptions(models: unknown, at: (key: string) => string, problems: string[]): void {
-  if (!isObject(models) || models.bispectrum === undefined) return;
+  if (!isJsonObject(models) || models.bispectrum === undefined) return;
   const b = models.bispectrum;
-  if (!isObject(b)) {
+  if (!isJsonObject(b)) {
     problems.push(`${at('models.bispectrum')}: must be an object { ${BISPECTRUM_KEYS.join(', ')} }`);
     return;
   }

@@ -8,7 +8,7 @@ import { selectData, type ScaleCuts } from '../../data/scale-cuts.js';
 import type { JointLikelihoodOptions } from '../../inference/likelihood/joint-likelihood-options.js';
 import { PROVIDED_QUANTITIES } from '../../inference/likelihood/model-source.js';
 import { ParameterSpace } from '../../inference/parameters/parameter-space.js';
-import { parseJsonWithLines, type JsonWithLines } from '../../io/json-with-lines.js';
+import { parseJsonWithLines, type JsonWithLines, isJsonObject, type JsonObject } from '../../io/json-with-lines.js';
 import { checkBispectrumModelOptions } from './model-options.js';
 
 /**
@@ -55,8 +55,6 @@ const SAMPLER_KEYS = {
 } as const;
 const PEAK_KEYS = ['starts', 'seed'];
 
-type Json = Record<string, unknown>;
-const isObject = (v: unknown): v is Json => typeof v === 'object' && v !== null && !Array.isArray(v);
 
 /** Collect the problems of a validator that throws InputError(s). */
 function collect(problems: string[], prefix: string, fn: () => void): void {
@@ -79,7 +77,7 @@ function readConfigText(path: string): string {
 
 function samplerChoice(raw: unknown, at: (k: string) => string, problems: string[]): SamplerChoice {
   const s = raw === undefined ? {} : raw;
-  if (!isObject(s)) {
+  if (!isJsonObject(s)) {
     problems.push(`${at('sampler')}: must be an object`);
     return { method: 'ensemble', seed: 1, workers: undefined, settings: {} };
   }
@@ -110,7 +108,7 @@ function samplerChoice(raw: unknown, at: (k: string) => string, problems: string
 
 function peakChoice(raw: unknown, seed: number, at: (k: string) => string, problems: string[]): PeakChoice {
   if (raw === undefined) return { starts: DEFAULT_PEAK_STARTS, seed };
-  if (!isObject(raw)) {
+  if (!isJsonObject(raw)) {
     problems.push(`${at('peak')}: must be an object { starts, seed }`);
     return { starts: DEFAULT_PEAK_STARTS, seed };
   }
@@ -136,13 +134,13 @@ function truthValues(raw: unknown, dir: string, at: (k: string) => string, probl
     problems.push(`${at('truth')}: ${e instanceof InputError ? e.message : `cannot read ${file} (${(e as NodeJS.ErrnoException).code ?? e})`}`);
     return { values: undefined, file };
   }
-  const v = isObject(parsed.value) && isObject(parsed.value.parameters) ? parsed.value.parameters : parsed.value;
+  const v = isJsonObject(parsed.value) && isJsonObject(parsed.value.parameters) ? parsed.value.parameters : parsed.value;
   const values: Record<string, number> = {};
-  if (!isObject(v)) problems.push(`${file}: must hold an object of named true values (or { "parameters": { ... } })`);
+  if (!isJsonObject(v)) problems.push(`${file}: must hold an object of named true values (or { "parameters": { ... } })`);
   else {
     for (const [k, x] of Object.entries(v)) {
       if (typeof x === 'number' && Number.isFinite(x)) values[k] = x;
-      else problems.push(`${parsed.where(isObject(parsed.value) && isObject(parsed.value.parameters) ? `parameters.${k}` : k)}: true value of ${k} must be a finite number`);
+      else problems.push(`${parsed.where(isJsonObject(parsed.value) && isJsonObject(parsed.value.parameters) ? `parameters.${k}` : k)}: true value of ${k} must be a finite number`);
     }
   }
   return { values, file };
@@ -153,7 +151,7 @@ export function readRunConfig(path: string): RunConfig {
   const file = resolve(path);
   const json = parseJsonWithLines(readConfigText(file), file);
   const at = (key: string) => `${key} (${json.where(key)})`;
-  if (!isObject(json.value)) throw new InputError(`${file}: the run config must be a JSON object`);
+  if (!isJsonObject(json.value)) throw new InputError(`${file}: the run config must be a JSON object`);
   const c = json.value;
   const dir = dirname(file);
   const problems: string[] = [];
@@ -178,20 +176,20 @@ export function readRunConfig(path: string): RunConfig {
   }
   let mode = 'fixed-template';
   if (c.cosmology !== undefined) {
-    if (!isObject(c.cosmology)) problems.push(`${at('cosmology')}: must be an object { mode, ... }`);
+    if (!isJsonObject(c.cosmology)) problems.push(`${at('cosmology')}: must be an object { mode, ... }`);
     else {
       mode = String(c.cosmology.mode);
       if (mode !== 'full' && mode !== 'fixed-template') problems.push(`${at('cosmology.mode')}: must be "full" or "fixed-template", got ${JSON.stringify(c.cosmology.mode)}`);
       const allowed = mode === 'full' ? ['mode', 'linearPower'] : ['mode', 'template', 'linearPower'];
       for (const k of Object.keys(c.cosmology)) if (!allowed.includes(k)) problems.push(`${at(`cosmology.${k}`)}: not a key of cosmology mode ${mode} (${allowed.join(', ')})`);
-      if (c.cosmology.template !== undefined) collect(problems, '', () => validateCosmology(c.cosmology && (c.cosmology as Json).template, { path: 'cosmology.template', file, lineOf: (k) => json.lineOf(`cosmology.template.${k}`) }));
+      if (c.cosmology.template !== undefined) collect(problems, '', () => validateCosmology(c.cosmology && (c.cosmology as JsonObject).template, { path: 'cosmology.template', file, lineOf: (k) => json.lineOf(`cosmology.template.${k}`) }));
     }
   }
   if (c.parameters !== undefined) collect(problems, '', () => new ParameterSpace(c.parameters as never, mode === 'full' || mode === 'fixed-template' ? PROVIDED_QUANTITIES[mode] : []));
-  if (c.models !== undefined && !isObject(c.models)) problems.push(`${at('models')}: must be an object { power?, bispectrum? }`);
+  if (c.models !== undefined && !isJsonObject(c.models)) problems.push(`${at('models')}: must be an object { power?, bispectrum? }`);
   checkBispectrumModelOptions(c.models, at, problems);
   if (c.covarianceFiducial !== undefined) {
-    if (!isObject(c.covarianceFiducial)) problems.push(`${at('covarianceFiducial')}: must be an object of named values`);
+    if (!isJsonObject(c.covarianceFiducial)) problems.push(`${at('covarianceFiducial')}: must be an object of named values`);
     else for (const [k, v] of Object.entries(c.covarianceFiducial)) if (typeof v !== 'number' || !Number.isFinite(v)) problems.push(`${at(`covarianceFiducial.${k}`)}: must be a finite number`);
   }
   const sampler = samplerChoice(c.sampler, at, problems);

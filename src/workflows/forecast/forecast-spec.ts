@@ -2,6 +2,7 @@ import { InputErrors } from '../../contracts/input-error.js';
 import type { LinearPowerOptions } from '../../cosmology/linear-power-from-cosmology.js';
 import type { BundleModelOptions } from '../../inference/likelihood/bundle-models.js';
 import type { ShellBinning } from './bin-forecast-setup.js';
+import { isJsonObject, type JsonObject } from '../../io/json-with-lines.js';
 
 /**
  * A Fisher forecast, as JSON (validated with every problem listed at once):
@@ -45,13 +46,11 @@ export const FORECAST_DEFAULT_BISPECTRUM_BINS: ShellBinning = { kMin: 0.02, kMax
 export const FORECAST_DEFAULT_STEPS = { mNu: 0.01 } as const;
 
 const KEYS = ['survey', 'cosmology', 'parameters', 'nuisance', 'power', 'bispectrum', 'steps', 'prior', 'linearPower', 'models'];
-type Json = Record<string, unknown>;
-const isObject = (v: unknown): v is Json => typeof v === 'object' && v !== null && !Array.isArray(v);
 const isNum = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 
 function numberMap(key: string, v: unknown, problems: string[], positive: boolean): Record<string, number> {
   if (v === undefined) return {};
-  if (!isObject(v)) {
+  if (!isJsonObject(v)) {
     problems.push(`${key} must be an object of named numbers`);
     return {};
   }
@@ -62,7 +61,7 @@ function numberMap(key: string, v: unknown, problems: string[], positive: boolea
 function binning(key: string, v: unknown, fallback: ShellBinning, defaultMultipoles: number[], problems: string[]): ShellBinning | undefined {
   if (v === null) return undefined;
   if (v === undefined) return fallback;
-  if (!isObject(v)) {
+  if (!isJsonObject(v)) {
     problems.push(`${key} must be an object { kMin, kMax, dk, multipoles? }, or null to leave the statistic out`);
     return undefined;
   }
@@ -77,7 +76,7 @@ function binning(key: string, v: unknown, fallback: ShellBinning, defaultMultipo
 
 function prior(v: unknown, problems: string[]): ForecastPrior | undefined {
   if (v === undefined) return undefined;
-  if (!isObject(v)) {
+  if (!isJsonObject(v)) {
     problems.push('prior must be an object { sigmas } or { names, fisher }');
     return undefined;
   }
@@ -99,7 +98,7 @@ function prior(v: unknown, problems: string[]): ForecastPrior | undefined {
 }
 
 export function validateForecastSpec(raw: unknown): ForecastSpec {
-  if (!isObject(raw)) throw new InputErrors(['the forecast must be a JSON object with at least "survey"']);
+  if (!isJsonObject(raw)) throw new InputErrors(['the forecast must be a JSON object with at least "survey"']);
   const problems: string[] = [];
   for (const k of Object.keys(raw)) if (!KEYS.includes(k)) problems.push(`${k} is not a forecast key (${KEYS.join(', ')})`);
   if (raw.survey === undefined) problems.push('survey is required: { skyArea?, bins: [{ zMin, zMax, nbar, volume? }] }');
@@ -113,7 +112,7 @@ export function validateForecastSpec(raw: unknown): ForecastSpec {
   if (raw.power === null && raw.bispectrum === null) problems.push('power and bispectrum cannot both be null');
   const steps = { ...FORECAST_DEFAULT_STEPS, ...numberMap('steps', raw.steps, problems, true) };
   const p = prior(raw.prior, problems);
-  for (const k of ['linearPower', 'models']) if (raw[k] !== undefined && !isObject(raw[k])) problems.push(`${k} must be an object`);
+  for (const k of ['linearPower', 'models']) if (raw[k] !== undefined && !isJsonObject(raw[k])) problems.push(`${k} must be an object`);
   if (problems.length) throw new InputErrors(problems);
   return { survey: raw.survey, cosmology, parameters, nuisance, power, bispectrum, steps, prior: p, linearPower: raw.linearPower as LinearPowerOptions | undefined, models: raw.models as BundleModelOptions | undefined };
 }

@@ -16,6 +16,7 @@ import { sampleEnsemble } from '../../inference/sampling/sample-ensemble.js';
 import { sampledParametersFromPriors } from '../../inference/sampling/sampled-parameters-from-priors.js';
 import { runScaleCutScan, scanContext, scanStepLikelihood, type ScaleCutScan, type ScaleCutScanInputs, type ScanPosterior } from './scale-cut-scan.js';
 import type { TheoryErrorEnvelope } from './theory-error-covariance.js';
+import { isJsonObject, type JsonObject } from '../../io/json-with-lines.js';
 
 /**
  * A scale-cut scan from JSON (every problem listed at once, each naming its key):
@@ -64,16 +65,14 @@ export interface ScanConfig {
 const KEYS = ['bundle', 'parameters', 'covariance', 'statistic', 'kMax', 'cuts', 'excludeShapes', 'theoryError', 'truth', 'shiftThreshold', 'pValueLimit', 'models', 'linearPower', 'mode', 'sampling'];
 const SAMPLING_KEYS = ['seed', 'walkers', 'maxSteps', 'workers'];
 const ENVELOPE_KEYS = ['amplitude', 'kRef', 'slope', 'correlationLength'];
-type Json = Record<string, unknown>;
-const isObject = (v: unknown): v is Json => typeof v === 'object' && v !== null && !Array.isArray(v);
 const isNum = (v: unknown): v is number => typeof v === 'number' && Number.isFinite(v);
 
 export function validateScanConfig(raw: unknown): ScanConfig {
-  if (!isObject(raw)) throw new InputErrors(['the scan config must be a JSON object']);
+  if (!isJsonObject(raw)) throw new InputErrors(['the scan config must be a JSON object']);
   const problems: string[] = [];
   for (const k of Object.keys(raw)) if (!KEYS.includes(k)) problems.push(`${k} is not a scan key (${KEYS.join(', ')})`);
   if (typeof raw.bundle !== 'string' || raw.bundle === '') problems.push('bundle must be the path of a measurement-bundle folder');
-  if (!isObject(raw.parameters)) problems.push('parameters must be an object of named parameters');
+  if (!isJsonObject(raw.parameters)) problems.push('parameters must be an object of named parameters');
   if (raw.covariance === undefined) problems.push('covariance is required: { "source": "matrix" | "mocks" | "gaussian", ... }');
   else {
     try {
@@ -87,19 +86,19 @@ export function validateScanConfig(raw: unknown): ScanConfig {
   if (!Array.isArray(raw.kMax) || raw.kMax.length === 0 || !raw.kMax.every((k) => isNum(k) && k > 0)) problems.push('kMax must be a non-empty list of positive wavenumbers (h/Mpc)');
   if (raw.excludeShapes !== undefined && !(Array.isArray(raw.excludeShapes) && raw.excludeShapes.every((s) => typeof s === 'string'))) problems.push('excludeShapes must be a list of shape-class names');
   if (raw.theoryError !== undefined) {
-    if (!isObject(raw.theoryError)) problems.push(`theoryError must be an object { ${ENVELOPE_KEYS.join(', ')} }`);
+    if (!isJsonObject(raw.theoryError)) problems.push(`theoryError must be an object { ${ENVELOPE_KEYS.join(', ')} }`);
     else {
       for (const k of Object.keys(raw.theoryError)) if (!ENVELOPE_KEYS.includes(k)) problems.push(`theoryError.${k} is not a key (${ENVELOPE_KEYS.join(', ')})`);
       for (const k of ENVELOPE_KEYS) if (!isNum(raw.theoryError[k])) problems.push(`theoryError.${k} must be a number`);
     }
   }
-  if (raw.truth !== undefined && !(isObject(raw.truth) && Object.values(raw.truth).every(isNum))) problems.push('truth must be an object of named numbers');
+  if (raw.truth !== undefined && !(isJsonObject(raw.truth) && Object.values(raw.truth).every(isNum))) problems.push('truth must be an object of named numbers');
   for (const k of ['shiftThreshold', 'pValueLimit']) if (raw[k] !== undefined && !isNum(raw[k])) problems.push(`${k} must be a number`);
-  for (const k of ['cuts', 'models', 'linearPower']) if (raw[k] !== undefined && !isObject(raw[k])) problems.push(`${k} must be an object`);
+  for (const k of ['cuts', 'models', 'linearPower']) if (raw[k] !== undefined && !isJsonObject(raw[k])) problems.push(`${k} must be an object`);
   if (raw.mode !== undefined && raw.mode !== 'best-fit' && raw.mode !== 'sampling') problems.push(`mode must be "best-fit" or "sampling", got ${JSON.stringify(raw.mode)}`);
-  if (raw.mode === 'sampling' && !isObject(raw.sampling)) problems.push('sampling must be an object { seed, walkers?, maxSteps?, workers? } with mode "sampling"');
+  if (raw.mode === 'sampling' && !isJsonObject(raw.sampling)) problems.push('sampling must be an object { seed, walkers?, maxSteps?, workers? } with mode "sampling"');
   if (raw.sampling !== undefined && raw.mode !== 'sampling') problems.push('sampling is only used with mode "sampling"');
-  if (isObject(raw.sampling)) {
+  if (isJsonObject(raw.sampling)) {
     for (const k of Object.keys(raw.sampling)) if (!SAMPLING_KEYS.includes(k)) problems.push(`sampling.${k} is not a key (${SAMPLING_KEYS.join(', ')})`);
     if (!Number.isInteger(raw.sampling.seed) || (raw.sampling.seed as number) < 0) problems.push('sampling.seed must be a non-negative integer');
     for (const k of ['walkers', 'maxSteps', 'workers']) if (raw.sampling[k] !== undefined && !(Number.isInteger(raw.sampling[k]) && (raw.sampling[k] as number) >= 0)) problems.push(`sampling.${k} must be a non-negative integer`);
