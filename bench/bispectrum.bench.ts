@@ -6,7 +6,11 @@
  *     (0.01–0.2, dk 0.005); geometry (bin nodes, pair kernels, orientation
  *     weights) is precomputed once and timed separately; the producer's own cost
  *     of building a spectrum is reported apart as well.
- * (b) re-evaluation for new bias and stochastic parameters from templates.
+ * (b) re-evaluation for new bias and stochastic parameters from templates
+ *     (TreeTemplateCombiner, the path of TreeBispectrumModel.evaluate; the
+ *     JavaScript combineTreeTemplates is timed beside it).
+ * The default path is the WebAssembly SIMD loop (compiled-multipole-kernel.ts);
+ * the JavaScript loop it compiles is timed in the same run for the ratio.
  * Also, for reference: the same full evaluation with the angle-averaged BAO
  * damping (an approximation; the model is then polynomial in the cosines and
  * uses precomputed angular averages), without IR resummation, and with AP
@@ -26,6 +30,7 @@ import {
   defaultTreeOrientationRule,
   resolveTreeSettings,
   combineTreeTemplates,
+  TreeTemplateCombiner,
 } from '../src/bispectrum/index.js';
 import { linearPowerFromCosmology, validateCosmology } from '../src/cosmology/index.js';
 import type { LinearSpectrum } from '../src/contracts/linear-spectrum.js';
@@ -71,6 +76,9 @@ const bench: Benchmark = {
       let next = 0;
       const full = timeMedian(() => evaluator.evaluate(settingsOf(spectra[next++ % spectra.length]), params), repeats, 2);
       const fullCpuMs = cpuMean(() => evaluator.evaluate(settingsOf(spectra[next++ % spectra.length]), params), repeats);
+      const jsEvaluator = new TreeMultipoleEvaluator(nodes, [0, 2], rule, { compiledKernel: false });
+      const jsCpuMs = cpuMean(() => jsEvaluator.evaluate(settingsOf(spectra[next++ % spectra.length]), params), repeats);
+      const compiledAgainCpuMs = cpuMean(() => evaluator.evaluate(settingsOf(spectra[next++ % spectra.length]), params), repeats);
       // Accuracy of the converged setting against a much finer bin-volume quadrature and orientation rule.
       const value = evaluator.evaluate(settingsOf(spectra[0]), params);
       const fine = new TreeMultipoleEvaluator(continuousBinNodes(bins, DEFAULT_VOLUME_ORDER + 3), [0, 2], orientationRule(8, 10)).evaluate(
@@ -92,8 +100,10 @@ const bench: Benchmark = {
         bispShotConst: 2 * rng.uniform(),
       }));
       let d = 0;
-      const reeval = timeMedian(() => combineTreeTemplates(templates, 2, draws[d++ % draws.length], out), 200, 20);
-      const reevalCpuMs = cpuMean(() => combineTreeTemplates(templates, 2, draws[d++ % draws.length], out), 2000);
+      const combiner = new TreeTemplateCombiner(2);
+      const reeval = timeMedian(() => combiner.combine(templates, draws[d++ % draws.length], out), 200, 20);
+      const reevalCpuMs = cpuMean(() => combiner.combine(templates, draws[d++ % draws.length], out), 2000);
+      const reevalJsCpuMs = cpuMean(() => combineTreeTemplates(templates, 2, draws[d++ % draws.length], out), 2000);
       // The same evaluation with IR resummation off (the model is then a polynomial in the cosines and the
       // exact 3 x 5 rule applies), and with AP distortion (true wavenumbers per orientation point).
       const noIR = (spectrum: LinearSpectrum) => ({ ...settingsOf(spectrum), irResummation: false });
@@ -130,6 +140,11 @@ const bench: Benchmark = {
         fullEvaluationMs: full,
         fullEvaluationCpuMs: fullCpuMs,
         fullEvaluationTargetMs: bins.size === 477 ? 10 : 100,
+        javascriptLoop: {
+          fullEvaluationCpuMs: jsCpuMs,
+          compiledCpuMsInterleaved: compiledAgainCpuMs,
+          speedUpOfCompiledLoop: jsCpuMs / compiledAgainCpuMs,
+        },
         maxRelativeDifferenceToFinerQuadrature: maxRelative(value, fine),
         withAngleAveragedDamping: {
           orientationPoints: avgRule.weight.length,
@@ -146,6 +161,7 @@ const bench: Benchmark = {
         templateReEvaluationMs: reeval,
         templateReEvaluationCpuMs: reevalCpuMs,
         templateReEvaluationTargetMs: 0.5,
+        templateReEvaluationJavascriptCpuMs: reevalJsCpuMs,
       };
     }
     return results;

@@ -10,6 +10,7 @@ export * from './triangle-physics.js';
 export * from './tree-template-terms.js';
 export * from './tree-template-integrand.js';
 export * from './tree-template-combination.js';
+export * from './compiled-template-combination.js';
 export * from './tree-direct-integrand.js';
 export * from './orientation-rule.js';
 export * from './triangle-node-set.js';

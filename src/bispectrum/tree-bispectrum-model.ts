@@ -6,7 +6,7 @@ import { averageOverTriangleNodes } from './orientation-average.js';
 import { checkMultipoles, exactPolynomialOrientationRule, orientationRule, type OrientationRule } from './orientation-rule.js';
 import type { TriangleBins } from './triangle-bins.js';
 import type { TriangleNodeSet } from './triangle-node-set.js';
-import { combineTreeTemplates } from './tree-template-combination.js';
+import { TreeTemplateCombiner } from './compiled-template-combination.js';
 import { TreeDirectIntegrand } from './tree-direct-integrand.js';
 import { TreeMultipoleEvaluator } from './tree-multipole-evaluator.js';
 import type { TreeBispectrumParameters } from './tree-template-terms.js';
@@ -103,6 +103,7 @@ export class TreeBispectrumModel implements StatisticModel {
   private readonly kLo: number;
   private readonly kHi: number;
   private cachedTemplates: Float64Array | undefined;
+  private combiner: TreeTemplateCombiner | undefined;
   /** Bins and box side when averaging over the lattice of a periodic box. */
   private readonly box: { readonly bins: TriangleBins; readonly boxSize: number } | undefined;
 
@@ -214,7 +215,8 @@ export class TreeBispectrumModel implements StatisticModel {
   }
 
   evaluate(params: ParameterValues, out?: Float64Array): Float64Array {
-    return combineTreeTemplates(this.templates(params), this.multipoles.length, this.polynomialParameters(params), out);
+    this.combiner ??= new TreeTemplateCombiner(this.multipoles.length);
+    return this.combiner.combine(this.templates(params), this.polynomialParameters(params), out);
   }
 
   linearPart(params: ParameterValues, linear: readonly string[]): LinearDecomposition {

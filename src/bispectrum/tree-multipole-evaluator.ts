@@ -12,6 +12,7 @@ import { checkWavenumbersInTable, isOrientationPolynomial, resolveTreeSettings, 
 import { TreeAngularMoments } from './tree-angular-moments.js';
 import { combineTreeTemplates } from './tree-template-combination.js';
 import { directLoopConstants } from './tree-loop-constants.js';
+import { CompiledMultipoleKernel } from './compiled-multipole-kernel.js';
 
 /**
  * Full evaluation of B_l — or of the averaged templates — on a fixed geometry
@@ -35,7 +36,11 @@ import { directLoopConstants } from './tree-loop-constants.js';
  * When no P depends on its angle (isOrientationPolynomial: no IR damping left
  * in the loop — IR off or angle-averaged —, no fingers-of-god damping, no AP)
  * the orientation averages are precomputed per node instead
- * (tree-angular-moments.ts, built on first use).
+ * (tree-angular-moments.ts, built on first use). Otherwise, without AP
+ * distortion, B_l comes from the same loop compiled to WebAssembly
+ * (compiled-multipole-kernel.ts, built on first use) unless the evaluator is
+ * built with `compiledKernel` false or the kernel is unavailable; the
+ * JavaScript loop below is its reference and fallback.
  * Output layouts: B_l [multipole][bin] as combineTreeTemplates; templates
  * [bin][multipole][value] as the averagers.
  */
@@ -51,8 +56,12 @@ export class TreeMultipoleEvaluator {
   private readonly pairKernels: Float64Array;
   private readonly kLo: number;
   private readonly kHi: number;
+  /** Whether to use the WebAssembly B_l loop; the kernel itself, once built (null: unavailable). */
+  private readonly useCompiled: boolean;
+  private compiled: CompiledMultipoleKernel | null | undefined;
 
-  constructor(nodes: TriangleNodeSet, multipoles: readonly number[], rule: OrientationRule) {
+  constructor(nodes: TriangleNodeSet, multipoles: readonly number[], rule: OrientationRule, options: { readonly compiledKernel?: boolean } = {}) {
+    this.useCompiled = options.compiledKernel ?? true;
     this.nodes = nodes;
     this.multipoles = multipoles;
     this.rule = rule;
@@ -200,14 +209,19 @@ export class TreeMultipoleEvaluator {
   }
 
   private undistorted(s: ResolvedTreeSettings, p: TreeBispectrumParameters): Float64Array {
+    const { aIR, cIR } = this.dampingCoefficients(s);
+    const constants = directLoopConstants(s, p, this.rule.phiCount);
+    const powers = this.sidePowers.fill(s);
+    const inputs = { ...constants, ...powers, aIR, cIR };
+    const kernel = this.compiledKernel();
+    if (kernel && kernel.accepts(inputs)) return kernel.multipoles(inputs);
     const { k1: K1, k2: K2, k3: K3, weight, start, binCount } = this.nodes;
     const nm = this.multipoles.length;
     const out = new Float64Array(binCount * nm);
     const { muCount, phiCount } = this.rule;
     const { mu: MU, lineOfSightSide2: SC, muWeights: WMU, cos12: C12, sin12: S12 } = this.geometry;
-    const { aIR, cIR } = this.dampingCoefficients(s);
-    const { fog, halfSv2, b1, bG2, f, hb2, hf, stochConst, stochP } = directLoopConstants(s, p, phiCount);
-    const { noWiggle: NW, wiggle: WG } = this.sidePowers.fill(s);
+    const { fog, halfSv2, b1, bG2, f, hb2, hf, stochConst, stochP } = constants;
+    const { noWiggle: NW, wiggle: WG } = powers;
     const ix = this.sidePowers.index;
     const pk = this.pairKernels;
     const acc = new Float64Array(nm);
@@ -282,6 +296,14 @@ export class TreeMultipoleEvaluator {
       for (let m = 0; m < nm; m++) out[m * binCount + bin] = acc[m];
     }
     return out;
+  }
+
+  private compiledKernel(): CompiledMultipoleKernel | null {
+    if (!this.useCompiled) return null;
+    if (this.compiled === undefined) {
+      this.compiled = CompiledMultipoleKernel.create(this.geometry, this.pairKernels, this.sidePowers.index, this.sidePowers.distinctLengths, this.kHi) ?? null;
+    }
+    return this.compiled;
   }
 
   /** Coefficients of the mu-dependent BAO damping exp(-u^2 [a + c mu^2]), u = k mu; zero without IR resummation. */
