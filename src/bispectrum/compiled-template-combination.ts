@@ -17,6 +17,8 @@ let compiled: EmbeddedWasmModule | null | undefined;
  * memory per combiner, reused for every template set of the same size. Where
  * WebAssembly SIMD is unavailable it calls combineTreeTemplates. Layouts as
  * combineTreeTemplates: templates [bin][multipole][value], out [multipole][bin].
+ * The copy is keyed on the array's identity: pass a new array for new template
+ * values (every template builder here returns one), not the same one changed in place.
  */
 export class TreeTemplateCombiner {
   readonly multipoleCount: number;
