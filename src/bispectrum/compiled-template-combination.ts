@@ -1,3 +1,4 @@
+import { InputError } from '../contracts/input-error.js';
 import { compileEmbeddedWasm, WasmArena, type EmbeddedWasmModule } from '../numerics/embedded-wasm.js';
 import { combineTreeTemplates } from './tree-template-combination.js';
 import { TREE_TEMPLATE_SIZE, treeTemplateCoefficients, type TreeBispectrumParameters } from './tree-template-terms.js';
@@ -10,19 +11,17 @@ interface DotExports {
 let compiled: EmbeddedWasmModule | null | undefined;
 
 /**
- * combineTreeTemplates for a sampler's inner loop: the templates are copied
- * into WebAssembly memory when they change (compared by identity) and each call
- * is the same dot product in SIMD (wasm/tree-template-dot.ts), several times
- * faster for thousands of bins (bench/bispectrum.bench.ts). One WebAssembly
- * memory per combiner, reused for every template set of the same size. Where
- * WebAssembly SIMD is unavailable it calls combineTreeTemplates. Layouts as
+ * combineTreeTemplates for a sampler's inner loop: `load` copies a template set
+ * into WebAssembly memory, and each `combine` is the same dot product in SIMD
+ * (wasm/tree-template-dot.ts), several times faster for thousands of bins
+ * (bench/bispectrum.bench.ts). One WebAssembly memory per combiner, reused for
+ * every template set of the same size. Where WebAssembly SIMD is unavailable
+ * it keeps the loaded array and calls combineTreeTemplates. Layouts as
  * combineTreeTemplates: templates [bin][multipole][value], out [multipole][bin].
- * The copy is keyed on the array's identity: pass a new array for new template
- * values (every template builder here returns one), not the same one changed in place.
  */
 export class TreeTemplateCombiner {
   readonly multipoleCount: number;
-  private current: Float64Array | undefined;
+  private loaded: Float64Array | undefined;
   private wasm: { arena: WasmArena<DotExports>; size: number; templates: number; coefficients: number; out: number } | undefined;
 
   constructor(multipoleCount: number) {
@@ -35,23 +34,33 @@ export class TreeTemplateCombiner {
     return compiled !== null;
   }
 
-  combine(templates: Float64Array, params: TreeBispectrumParameters, out?: Float64Array): Float64Array {
+  /** Take a template set (copied: later changes to the array need another `load`). */
+  load(templates: Float64Array): void {
     const stride = this.multipoleCount * TREE_TEMPLATE_SIZE;
-    if (!compiled || templates.length % stride !== 0) return combineTreeTemplates(templates, this.multipoleCount, params, out);
-    const bins = templates.length / stride;
-    const n = bins * this.multipoleCount;
+    if (templates.length % stride !== 0) {
+      throw new InputError(`bispectrum templates: length ${templates.length} is not a multiple of ${this.multipoleCount} multipoles x ${TREE_TEMPLATE_SIZE} terms`);
+    }
+    if (!compiled) {
+      this.loaded = templates.slice();
+      return;
+    }
     if (this.wasm?.size !== templates.length) {
       const arena = new WasmArena<DotExports>(compiled, 'template combination');
-      this.wasm = { arena, size: templates.length, templates: arena.reserve(templates.byteLength), coefficients: arena.reserve(8 * TREE_TEMPLATE_SIZE), out: arena.reserve(8 * n) };
-      this.current = undefined;
+      const values = templates.length / TREE_TEMPLATE_SIZE;
+      this.wasm = { arena, size: templates.length, templates: arena.reserve(templates.byteLength), coefficients: arena.reserve(8 * TREE_TEMPLATE_SIZE), out: arena.reserve(8 * values) };
     }
+    this.wasm.arena.f64(this.wasm.templates, templates.length).set(templates);
+    this.loaded = templates;
+  }
+
+  /** B_l [multipole][bin] of the loaded templates for these parameters. */
+  combine(params: TreeBispectrumParameters, out?: Float64Array): Float64Array {
+    if (!this.loaded) throw new Error('TreeTemplateCombiner: combine before load');
     const w = this.wasm;
-    if (this.current !== templates) {
-      w.arena.f64(w.templates, templates.length).set(templates);
-      this.current = templates;
-    }
+    if (!w) return combineTreeTemplates(this.loaded, this.multipoleCount, params, out);
+    const n = w.size / TREE_TEMPLATE_SIZE;
     treeTemplateCoefficients(params, w.arena.f64(w.coefficients, TREE_TEMPLATE_SIZE));
-    w.arena.exports.combine(bins, this.multipoleCount, w.templates, w.coefficients, w.out);
+    w.arena.exports.combine(n / this.multipoleCount, this.multipoleCount, w.templates, w.coefficients, w.out);
     const res = out ?? new Float64Array(n);
     res.set(w.arena.f64(w.out, n));
     return res;

@@ -104,6 +104,8 @@ export class TreeBispectrumModel implements StatisticModel {
   private readonly kHi: number;
   private cachedTemplates: Float64Array | undefined;
   private combiner: TreeTemplateCombiner | undefined;
+  /** The template set last loaded into the combiner. */
+  private combinedTemplates: Float64Array | undefined;
   /** Bins and box side when averaging over the lattice of a periodic box. */
   private readonly box: { readonly bins: TriangleBins; readonly boxSize: number } | undefined;
 
@@ -215,8 +217,14 @@ export class TreeBispectrumModel implements StatisticModel {
   }
 
   evaluate(params: ParameterValues, out?: Float64Array): Float64Array {
-    this.combiner ??= new TreeTemplateCombiner(this.multipoles.length);
-    return this.combiner.combine(this.templates(params), this.polynomialParameters(params), out);
+    const templates = this.templates(params);
+    if (templates !== this.combinedTemplates) {
+      // Template arrays are never changed in place here: a new array is a new set.
+      this.combiner ??= new TreeTemplateCombiner(this.multipoles.length);
+      this.combiner.load(templates);
+      this.combinedTemplates = templates;
+    }
+    return (this.combiner as TreeTemplateCombiner).combine(this.polynomialParameters(params), out);
   }
 
   linearPart(params: ParameterValues, linear: readonly string[]): LinearDecomposition {
