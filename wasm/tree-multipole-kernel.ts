@@ -1,6 +1,6 @@
 // AssemblyScript source of the compiled B_l orientation loop of
 // TreeMultipoleEvaluator (src/bispectrum/tree-multipole-evaluator.ts, method
-// `undistorted`): the same sums in the same order, with the two lanes of an
+// `undistorted`): the same terms, with the two lanes of an
 // f64x2 vector carrying two mu nodes of the orientation rule. Built by
 // `npm run build:wasm` into src/bispectrum/tree-multipole-kernel-wasm.ts;
 // tests/bispectrum/wasm-kernel.test.ts checks that the committed bytes come
@@ -43,6 +43,38 @@ export function setExpTable(p: usize): void {
 }
 @inline function mul(a: v128, b: v128): v128 {
   return f64x2.mul(a, b);
+}
+
+/**
+ * One orientation point (both lanes): 2 B_det + A_P b1/nbar (Z1_2 P_2 + Z1_3 P_3),
+ * the part of the host loop's per-point sum that changes with phi. `sc` is
+ * sqrt(1 - mu1^2) cos(phi); the rest is fixed per node and mu pair.
+ */
+@inline function phiPoint(
+  sc: v128, A2: v128, vbs2: v128, nu1: v128, uu1: v128, vik2: v128, vik3: v128, vb1: v128, vf: v128,
+  nw2: v128, w2: v128, nw3: v128, w3: v128, vaIR: v128, vcIR: v128, c12: v128, g12: v128, c31: v128, g31: v128,
+  cg23: v128, hu1: v128, hv1: v128, hz1: v128, zP1: v128, fog: bool, vhs: v128, vStochP: v128,
+): v128 {
+  // LOS components u_i = k_i mu_i of the three sides; u1 + u2 + u3 = 0.
+  const u2 = sub(A2, mul(vbs2, sc));
+  const u3 = sub(nu1, u2);
+  const v2 = mul(u2, vik2);
+  const v3 = mul(u3, vik3);
+  const uu2 = mul(u2, u2);
+  const uu3 = mul(u3, u3);
+  const q2 = mul(u2, v2);
+  const q3 = mul(u3, v3);
+  const z2 = add(vb1, mul(vf, q2));
+  const z3 = add(vb1, mul(vf, q3));
+  const zP2 = mul(z2, add(nw2, mul(w2, expNegative2(mul(uu2, add(vaIR, mul(vcIR, q2)))))));
+  const zP3 = mul(z3, add(nw3, mul(w3, expNegative2(mul(uu3, add(vaIR, mul(vcIR, q3)))))));
+  // Z2 of each pair (Scoccimarro, Couchman & Frieman 1999, eq. 13), as in the host loop.
+  const zz12 = sub(add(c12, mul(g12, q3)), mul(u3, add(mul(hv1, z2), mul(v2, hz1))));
+  const zz23 = sub(cg23, mul(hu1, add(mul(v2, z3), mul(v3, z2))));
+  const zz31 = sub(add(c31, mul(g31, q2)), mul(u2, add(mul(v3, hz1), mul(hv1, z3))));
+  let d = add(mul(zP2, add(mul(zP1, zz12), mul(zP3, zz23))), mul(mul(zP3, zP1), zz31));
+  if (fog) d = mul(d, expNegative2(mul(vhs, add(add(uu1, uu2), uu3))));
+  return add(add(d, d), mul(vStochP, add(zP2, zP3)));
 }
 
 /**
@@ -141,33 +173,22 @@ export function multipoles(
         const cg23 = add(c23, mul(g23, q1));
         const A2 = mul(va2, m1);
         const nu1 = f64x2.neg(u1);
-        let det = S(0);
-        let lin = S(0);
         const sc = SC2 + <usize>(jj * phiCount) * 16;
-        for (let p = 0; p < phiCount; p++) {
-          // LOS components u_i = k_i mu_i of the three sides; u1 + u2 + u3 = 0.
-          const u2 = sub(A2, mul(vbs2, v128.load(sc + (<usize>p << 4))));
-          const u3 = sub(nu1, u2);
-          const v2 = mul(u2, vik2);
-          const v3 = mul(u3, vik3);
-          const uu2 = mul(u2, u2);
-          const uu3 = mul(u3, u3);
-          const q2 = mul(u2, v2);
-          const q3 = mul(u3, v3);
-          const z2 = add(vb1, mul(vf, q2));
-          const z3 = add(vb1, mul(vf, q3));
-          const zP2 = mul(z2, add(nw2, mul(w2, expNegative2(mul(uu2, add(vaIR, mul(vcIR, q2)))))));
-          const zP3 = mul(z3, add(nw3, mul(w3, expNegative2(mul(uu3, add(vaIR, mul(vcIR, q3)))))));
-          // Z2 of each pair (Scoccimarro, Couchman & Frieman 1999, eq. 13), as in the host loop.
-          const zz12 = sub(add(c12, mul(g12, q3)), mul(u3, add(mul(hv1, z2), mul(v2, hz1))));
-          const zz23 = sub(cg23, mul(hu1, add(mul(v2, z3), mul(v3, z2))));
-          const zz31 = sub(add(c31, mul(g31, q2)), mul(u2, add(mul(v3, hz1), mul(hv1, z3))));
-          let d = add(mul(zP2, add(mul(zP1, zz12), mul(zP3, zz23))), mul(mul(zP3, zP1), zz31));
-          if (fog) d = mul(d, expNegative2(mul(vhs, add(add(uu1, uu2), uu3))));
-          det = add(det, d);
-          lin = add(lin, add(zP2, zP3));
+        // Two phi points per trip, summed apart: two independent chains for the out-of-order core.
+        let e0 = S(0);
+        let e1 = S(0);
+        let p = 0;
+        for (; p + 1 < phiCount; p += 2) {
+          const s0 = v128.load(sc + (<usize>p << 4));
+          const s1 = v128.load(sc + (<usize>(p + 1) << 4));
+          e0 = add(e0, phiPoint(s0, A2, vbs2, nu1, uu1, vik2, vik3, vb1, vf, nw2, w2, nw3, w3, vaIR, vcIR, c12, g12, c31, g31, cg23, hu1, hv1, hz1, zP1, fog, vhs, vStochP));
+          e1 = add(e1, phiPoint(s1, A2, vbs2, nu1, uu1, vik2, vik3, vb1, vf, nw2, w2, nw3, w3, vaIR, vcIR, c12, g12, c31, g31, cg23, hu1, hv1, hz1, zP1, fog, vhs, vStochP));
         }
-        const sum = mul(wn, add(add(add(det, det), mul(vStochP, add(mul(vPhi, zP1), lin))), vStochC));
+        if (p < phiCount) {
+          const s0 = v128.load(sc + (<usize>p << 4));
+          e0 = add(e0, phiPoint(s0, A2, vbs2, nu1, uu1, vik2, vik3, vb1, vf, nw2, w2, nw3, w3, vaIR, vcIR, c12, g12, c31, g31, cg23, hu1, hv1, hz1, zP1, fog, vhs, vStochP));
+        }
+        const sum = mul(wn, add(add(add(e0, e1), mul(vStochP, mul(vPhi, zP1))), vStochC));
         const wm = WMU2 + <usize>(jj * nm) * 16;
         for (let m = 0; m < nm; m++) {
           const t = mul(sum, v128.load(wm + (<usize>m << 4)));

@@ -40,8 +40,8 @@ export function compiledKernelAvailable(): boolean {
 /**
  * The B_l orientation loop of TreeMultipoleEvaluator without AP distortion,
  * compiled to WebAssembly with SIMD (wasm/tree-multipole-kernel.ts, built into
- * tree-multipole-kernel-wasm.ts by `npm run build:wasm`): the same sums, two mu
- * nodes per f64x2 vector, about twice as fast as the JavaScript loop on one
+ * tree-multipole-kernel-wasm.ts by `npm run build:wasm`): the same terms, two mu
+ * nodes per f64x2 vector and the phi sum in two chains (so rounding differs), about twice as fast as the JavaScript loop on one
  * core (bench/bispectrum.bench.ts). Each instance owns a WebAssembly memory
  * holding the geometry, copied once; per evaluation only the side powers and
  * ten constants go in. `create` returns undefined where WebAssembly SIMD is
