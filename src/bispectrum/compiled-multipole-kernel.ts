@@ -24,17 +24,9 @@ interface KernelExports {
   multipoles(...args: number[]): void;
 }
 
-let compiled: EmbeddedWasmModule | null | undefined;
-
-/** The kernel module, compiled once per process; null where WebAssembly SIMD is unavailable. */
-function kernelModule(): EmbeddedWasmModule | null {
-  if (compiled === undefined) compiled = compileEmbeddedWasm(TREE_MULTIPOLE_KERNEL_WASM);
-  return compiled;
-}
-
 /** Whether this runtime compiles the kernel (WebAssembly with SIMD). */
 export function compiledKernelAvailable(): boolean {
-  return kernelModule() !== null;
+  return compileEmbeddedWasm(TREE_MULTIPOLE_KERNEL_WASM) !== null;
 }
 
 /**
@@ -59,7 +51,7 @@ export class CompiledMultipoleKernel {
   private readonly distinct: number;
 
   static create(geometry: OrientationGeometry, pairKernels: Float64Array, sideIndex: Int32Array, distinctLengths: number, kMax: number): CompiledMultipoleKernel | undefined {
-    const module = kernelModule();
+    const module = compileEmbeddedWasm(TREE_MULTIPOLE_KERNEL_WASM);
     return module ? new CompiledMultipoleKernel(module, geometry, pairKernels, sideIndex, distinctLengths, kMax) : undefined;
   }
 

@@ -1,14 +1,11 @@
-import { InputError } from '../contracts/input-error.js';
 import { compileEmbeddedWasm, WasmArena, type EmbeddedWasmModule } from '../numerics/embedded-wasm.js';
-import { combineTreeTemplates } from './tree-template-combination.js';
+import { combineTreeTemplates, templateBinCount } from './tree-template-combination.js';
 import { TREE_TEMPLATE_SIZE, treeTemplateCoefficients, type TreeBispectrumParameters } from './tree-template-terms.js';
 import { TREE_TEMPLATE_DOT_WASM } from './tree-template-dot-wasm.js';
 
 interface DotExports {
   combine(nBins: number, nMultipoles: number, templates: number, coefficients: number, out: number): void;
 }
-
-let compiled: EmbeddedWasmModule | null | undefined;
 
 /**
  * combineTreeTemplates for a sampler's inner loop: `load` copies a template set
@@ -21,31 +18,35 @@ let compiled: EmbeddedWasmModule | null | undefined;
  */
 export class TreeTemplateCombiner {
   readonly multipoleCount: number;
+  private readonly module: EmbeddedWasmModule | null;
+  /** The array last loaded (a copy where WebAssembly is unavailable). */
   private loaded: Float64Array | undefined;
   private wasm: { arena: WasmArena<DotExports>; size: number; templates: number; coefficients: number; out: number } | undefined;
 
   constructor(multipoleCount: number) {
     this.multipoleCount = multipoleCount;
-    if (compiled === undefined) compiled = compileEmbeddedWasm(TREE_TEMPLATE_DOT_WASM);
+    this.module = compileEmbeddedWasm(TREE_TEMPLATE_DOT_WASM);
   }
 
   /** Whether the WebAssembly dot product is in use. */
   get compiled(): boolean {
-    return compiled !== null;
+    return this.module !== null;
+  }
+
+  /** Whether `templates` is the array last loaded. */
+  holds(templates: Float64Array): boolean {
+    return this.loaded === templates;
   }
 
   /** Take a template set (copied: later changes to the array need another `load`). */
   load(templates: Float64Array): void {
-    const stride = this.multipoleCount * TREE_TEMPLATE_SIZE;
-    if (templates.length % stride !== 0) {
-      throw new InputError(`bispectrum templates: length ${templates.length} is not a multiple of ${this.multipoleCount} multipoles x ${TREE_TEMPLATE_SIZE} terms`);
-    }
-    if (!compiled) {
+    templateBinCount(templates, this.multipoleCount);
+    if (!this.module) {
       this.loaded = templates.slice();
       return;
     }
     if (this.wasm?.size !== templates.length) {
-      const arena = new WasmArena<DotExports>(compiled, 'template combination');
+      const arena = new WasmArena<DotExports>(this.module, 'template combination');
       const values = templates.length / TREE_TEMPLATE_SIZE;
       this.wasm = { arena, size: templates.length, templates: arena.reserve(templates.byteLength), coefficients: arena.reserve(8 * TREE_TEMPLATE_SIZE), out: arena.reserve(8 * values) };
     }

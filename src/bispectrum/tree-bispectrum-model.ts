@@ -103,9 +103,7 @@ export class TreeBispectrumModel implements StatisticModel {
   private readonly kLo: number;
   private readonly kHi: number;
   private cachedTemplates: Float64Array | undefined;
-  private combiner: TreeTemplateCombiner | undefined;
-  /** The template set last loaded into the combiner. */
-  private combinedTemplates: Float64Array | undefined;
+  private readonly combiner: TreeTemplateCombiner;
   /** Bins and box side when averaging over the lattice of a periodic box. */
   private readonly box: { readonly bins: TriangleBins; readonly boxSize: number } | undefined;
 
@@ -114,6 +112,7 @@ export class TreeBispectrumModel implements StatisticModel {
     this.options = options;
     this.multipoles = options.multipoles ?? [0, 2];
     checkMultipoles(this.multipoles);
+    this.combiner = new TreeTemplateCombiner(this.multipoles.length);
     if ((options.bins === undefined) === (options.triangles === undefined)) {
       throw new InputError('bispectrum model: give exactly one of bins and triangles');
     }
@@ -218,13 +217,9 @@ export class TreeBispectrumModel implements StatisticModel {
 
   evaluate(params: ParameterValues, out?: Float64Array): Float64Array {
     const templates = this.templates(params);
-    if (templates !== this.combinedTemplates) {
-      // Template arrays are never changed in place here: a new array is a new set.
-      this.combiner ??= new TreeTemplateCombiner(this.multipoles.length);
-      this.combiner.load(templates);
-      this.combinedTemplates = templates;
-    }
-    return (this.combiner as TreeTemplateCombiner).combine(this.polynomialParameters(params), out);
+    // Template arrays are never changed in place here: a new array is a new set.
+    if (!this.combiner.holds(templates)) this.combiner.load(templates);
+    return this.combiner.combine(this.polynomialParameters(params), out);
   }
 
   linearPart(params: ParameterValues, linear: readonly string[]): LinearDecomposition {

@@ -10,17 +10,22 @@ import { TREE_TEMPLATE_SIZE, treeTemplateCoefficients, type TreeBispectrumParame
 // combineTreeTemplates writes the dot product out term by term.
 if (TREE_TEMPLATE_SIZE !== 17) throw new Error(`combineTreeTemplates is written for 17 template terms, the term list has ${TREE_TEMPLATE_SIZE}`);
 
+/** Bins in a template array [bin][multipole][value]; refuses a length that does not fit. */
+export function templateBinCount(templates: Float64Array, nMultipoles: number): number {
+  const stride = nMultipoles * TREE_TEMPLATE_SIZE;
+  if (templates.length % stride !== 0) {
+    throw new InputError(`bispectrum templates: length ${templates.length} is not a multiple of ${nMultipoles} multipoles x ${TREE_TEMPLATE_SIZE} terms`);
+  }
+  return templates.length / stride;
+}
+
 export function combineTreeTemplates(
   templates: Float64Array,
   nMultipoles: number,
   params: TreeBispectrumParameters,
   out?: Float64Array,
 ): Float64Array {
-  const stride = nMultipoles * TREE_TEMPLATE_SIZE;
-  if (templates.length % stride !== 0) {
-    throw new InputError(`bispectrum templates: length ${templates.length} is not a multiple of ${nMultipoles} multipoles x ${TREE_TEMPLATE_SIZE} terms`);
-  }
-  const nBins = templates.length / stride;
+  const nBins = templateBinCount(templates, nMultipoles);
   const res = out ?? new Float64Array(nBins * nMultipoles);
   const c = treeTemplateCoefficients(params);
   // The 17 coefficients as locals and the dot product written out: about three times faster

@@ -16,13 +16,21 @@ declare const WebAssembly: {
   Instance: new (module: EmbeddedWasmModule, imports: object) => { readonly exports: unknown };
 };
 
+const modules = new Map<string, EmbeddedWasmModule | null>();
+
+/** The module of these bytes, compiled once per process; null where this runtime cannot (no WebAssembly or no SIMD). */
 export function compileEmbeddedWasm(base64: string): EmbeddedWasmModule | null {
-  try {
-    return new WebAssembly.Module(Uint8Array.from(atob(base64), (c) => c.charCodeAt(0)));
-  } catch {
-    // No WebAssembly, or no SIMD in this runtime: callers keep their JavaScript path.
-    return null;
+  let module = modules.get(base64);
+  if (module === undefined) {
+    try {
+      module = new WebAssembly.Module(Uint8Array.from(atob(base64), (c) => c.charCodeAt(0)));
+    } catch {
+      // Callers keep their JavaScript path.
+      module = null;
+    }
+    modules.set(base64, module);
   }
+  return module;
 }
 
 interface ArenaExports {

@@ -9,12 +9,11 @@
 const STEPS = 128;
 /** Arguments at or beyond this leave the table (the WebAssembly kernel of src/bispectrum/compiled-multipole-kernel.ts relies on it). */
 export const EXP_TABLE_LIMIT = 64;
-const LIMIT = EXP_TABLE_LIMIT;
 /** exp(-j/128), j = 0 .. 128 * 64; shared with the WebAssembly kernel. */
-export const EXP_TABLE = Float64Array.from({ length: STEPS * LIMIT + 1 }, (_, j) => Math.exp(-j / STEPS));
+export const EXP_TABLE = Float64Array.from({ length: STEPS * EXP_TABLE_LIMIT + 1 }, (_, j) => Math.exp(-j / STEPS));
 
 export function expNegative(x: number): number {
-  if (!(x >= 0 && x < LIMIT)) return Math.exp(-x);
+  if (!(x >= 0 && x < EXP_TABLE_LIMIT)) return Math.exp(-x);
   const j = (x * STEPS) | 0;
   const d = x - j / STEPS;
   return EXP_TABLE[j] * (1 - d * (1 - d * (0.5 - d * (1 / 6 - d / 24))));
