@@ -1,49 +1,18 @@
-// AssemblyScript source of the compiled B_l orientation loop of
-// TreeMultipoleEvaluator (src/bispectrum/tree-multipole-evaluator.ts, method
-// `undistorted`): the same terms, with the two lanes of an
-// f64x2 vector carrying two mu nodes of the orientation rule. Built by
+// AssemblyScript source of the compiled orientation loops of
+// TreeMultipoleEvaluator (src/bispectrum/tree-multipole-evaluator.ts): B_l
+// (`multipoles` here, method `undistorted` there) and the averaged templates
+// (`templates`, tree-template-loop.ts; method `undistortedTemplates`), the
+// same terms, with the two lanes of an f64x2 vector carrying two mu nodes of
+// the orientation rule. One module, so both share the geometry. Built by
 // `npm run build:wasm` into src/bispectrum/tree-multipole-kernel-wasm.ts;
 // tests/bispectrum/wasm-kernel.test.ts checks that the committed bytes come
 // from this file and that both loops agree.
 
 export { reserve } from './reserve';
+export { setExpTable } from './simd-f64x2';
+export { templates } from './tree-template-loop';
 
-// exp(-x) as src/numerics/fast-exp.ts: exp(-j/128) from its table (set by the host,
-// 128 * 64 + 1 entries) times the Taylor series of exp(-d) to d^4, j = floor(128 x).
-// The host guarantees 0 <= x < 64 in both lanes.
-const STEPS: f64 = 128;
-let table: usize = 0;
-export function setExpTable(p: usize): void {
-  table = p;
-}
-
-@inline function expNegative2(x: v128): v128 {
-  const j = i32x4.trunc_sat_f64x2_s_zero(f64x2.mul(x, f64x2.splat(STEPS)));
-  const d = f64x2.sub(x, f64x2.mul(f64x2.convert_low_i32x4_s(j), f64x2.splat(1 / STEPS)));
-  const t = f64x2.replace_lane(
-    f64x2.splat(load<f64>(table + (<usize>i32x4.extract_lane(j, 0) << 3))),
-    1,
-    load<f64>(table + (<usize>i32x4.extract_lane(j, 1) << 3)),
-  );
-  let p = f64x2.sub(f64x2.splat(1.0 / 6), f64x2.mul(d, f64x2.splat(1.0 / 24)));
-  p = f64x2.sub(f64x2.splat(0.5), f64x2.mul(d, p));
-  p = f64x2.sub(f64x2.splat(1), f64x2.mul(d, p));
-  p = f64x2.sub(f64x2.splat(1), f64x2.mul(d, p));
-  return f64x2.mul(t, p);
-}
-
-@inline function S(x: f64): v128 {
-  return f64x2.splat(x);
-}
-@inline function add(a: v128, b: v128): v128 {
-  return f64x2.add(a, b);
-}
-@inline function sub(a: v128, b: v128): v128 {
-  return f64x2.sub(a, b);
-}
-@inline function mul(a: v128, b: v128): v128 {
-  return f64x2.mul(a, b);
-}
+import { add, expNegative2, mul, S, sub } from './simd-f64x2';
 
 /**
  * One orientation point (both lanes): 2 B_det + A_P b1/nbar (Z1_2 P_2 + Z1_3 P_3),

@@ -1,12 +1,20 @@
 import { EXP_TABLE, EXP_TABLE_LIMIT } from '../numerics/fast-exp.js';
 import type { OrientationGeometry } from './tree-multipole-distorted.js';
 import { TREE_MULTIPOLE_KERNEL_WASM } from './tree-multipole-kernel-wasm.js';
+import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
 import { compileEmbeddedWasm, WasmArena, type EmbeddedWasmModule } from '../numerics/embedded-wasm.js';
 
-/** Per-evaluation inputs of the B_l loop, as TreeMultipoleEvaluator prepares them. */
-export interface MultipoleLoopInputs {
+/** What both loops need per evaluation: side powers and the damping coefficients. */
+export interface DampedSideInputs {
   readonly noWiggle: Float64Array;
   readonly wiggle: Float64Array;
+  readonly aIR: number;
+  readonly cIR: number;
+  readonly halfSv2: number;
+}
+
+/** Per-evaluation inputs of the B_l loop, as TreeMultipoleEvaluator prepares them. */
+export interface MultipoleLoopInputs extends DampedSideInputs {
   readonly b1: number;
   readonly bG2: number;
   readonly f: number;
@@ -14,14 +22,17 @@ export interface MultipoleLoopInputs {
   readonly hf: number;
   readonly stochConst: number;
   readonly stochP: number;
-  readonly aIR: number;
-  readonly cIR: number;
-  readonly halfSv2: number;
+}
+
+/** Per-evaluation inputs of the template loop: the side powers, damping and 1/nbar. */
+export interface TemplateLoopInputs extends DampedSideInputs {
+  readonly inverseDensity: number;
 }
 
 interface KernelExports {
   setExpTable(pointer: number): void;
   multipoles(...args: number[]): void;
+  templates(...args: number[]): void;
 }
 
 /** Whether this runtime compiles the kernel (WebAssembly with SIMD). */
@@ -30,11 +41,12 @@ export function compiledKernelAvailable(): boolean {
 }
 
 /**
- * The B_l orientation loop of TreeMultipoleEvaluator without AP distortion,
- * compiled to WebAssembly with SIMD (wasm/tree-multipole-kernel.ts, built into
- * tree-multipole-kernel-wasm.ts by `npm run build:wasm`): the same terms, two mu
- * nodes per f64x2 vector and the phi sum in two chains (so rounding differs), about twice as fast as the JavaScript loop on one
- * core (bench/bispectrum.bench.ts). Each instance owns a WebAssembly memory
+ * The B_l and template orientation loops of TreeMultipoleEvaluator without AP
+ * distortion, compiled to WebAssembly with SIMD (wasm/tree-multipole-kernel.ts
+ * and wasm/tree-template-loop.ts, built into tree-multipole-kernel-wasm.ts by
+ * `npm run build:wasm`): the same terms, two mu nodes per f64x2 vector (and for
+ * B_l the phi sum in two chains), so rounding differs; faster than the
+ * JavaScript loops on one core (bench/bispectrum.bench.ts). Each instance owns a WebAssembly memory
  * holding the geometry, copied once; per evaluation only the side powers and
  * ten constants go in. `create` returns undefined where WebAssembly SIMD is
  * not available; `accepts` tells whether an evaluation keeps the kernel's exp
@@ -47,7 +59,10 @@ export class CompiledMultipoleKernel {
   private readonly muPairs: number;
   private readonly phiCount: number;
   private readonly kMax2: number;
-  private readonly at: Record<'start' | 'k1' | 'k2' | 'k3' | 'cos12' | 'sin12' | 'weight' | 'pairs' | 'index' | 'mu' | 'los' | 'muWeights' | 'nw' | 'w' | 'consts' | 'acc' | 'out', number>;
+  private readonly at: Record<
+    'start' | 'k1' | 'k2' | 'k3' | 'cos12' | 'sin12' | 'weight' | 'pairs' | 'index' | 'mu' | 'los' | 'muWeights' | 'nw' | 'w' | 'consts' | 'acc' | 'out' | 'templateAcc' | 'templateOut',
+    number
+  >;
   private readonly distinct: number;
 
   static create(geometry: OrientationGeometry, pairKernels: Float64Array, sideIndex: Int32Array, distinctLengths: number, kMax: number): CompiledMultipoleKernel | undefined {
@@ -97,24 +112,42 @@ export class CompiledMultipoleKernel {
       consts: arena.reserve(80),
       acc: arena.reserve(8 * nm),
       out: arena.reserve(8 * nm * nodes.binCount),
+      templateAcc: arena.reserve(16 * nm * TREE_TEMPLATE_SIZE),
+      templateOut: arena.reserve(8 * nm * TREE_TEMPLATE_SIZE * nodes.binCount),
     };
   }
 
   /** Whether every exp argument of this evaluation stays in 0 <= x < 64 (u^2 <= k^2, mu^2 <= 1). */
-  accepts(v: MultipoleLoopInputs): boolean {
+  accepts(v: DampedSideInputs): boolean {
     return v.aIR >= 0 && v.cIR >= 0 && (v.aIR + v.cIR) * this.kMax2 < EXP_TABLE_LIMIT && v.halfSv2 * 3 * this.kMax2 < EXP_TABLE_LIMIT;
   }
 
   /** B_l, layout [multipole][bin] (a new array). */
   multipoles(v: MultipoleLoopInputs): Float64Array {
     const { arena, at } = this;
-    arena.f64(at.nw, this.distinct).set(v.noWiggle);
-    arena.f64(at.w, this.distinct).set(v.wiggle);
+    this.putSidePowers(v);
     arena.f64(at.consts, 10).set([v.b1, v.bG2, v.f, v.hb2, v.hf, v.stochConst, v.stochP, v.aIR, v.cIR, v.halfSv2]);
     arena.exports.multipoles(
       this.binCount, at.start, at.k1, at.k2, at.k3, at.cos12, at.sin12, at.weight, at.pairs, at.index, at.nw, at.w,
       this.muPairs, this.phiCount, at.mu, at.los, at.muWeights, this.multipoleCount, at.consts, at.acc, at.out,
     );
     return arena.f64(at.out, this.multipoleCount * this.binCount).slice();
+  }
+
+  /** Averaged templates, layout [bin][multipole][value] (a new array). */
+  templates(v: TemplateLoopInputs): Float64Array {
+    const { arena, at } = this;
+    this.putSidePowers(v);
+    arena.f64(at.consts, 4).set([v.aIR, v.cIR, v.halfSv2, v.inverseDensity]);
+    arena.exports.templates(
+      this.binCount, at.start, at.k1, at.k2, at.k3, at.cos12, at.sin12, at.weight, at.pairs, at.index, at.nw, at.w,
+      this.muPairs, this.phiCount, at.mu, at.los, at.muWeights, this.multipoleCount, at.consts, at.templateAcc, at.templateOut,
+    );
+    return arena.f64(at.templateOut, this.multipoleCount * TREE_TEMPLATE_SIZE * this.binCount).slice();
+  }
+
+  private putSidePowers(v: DampedSideInputs): void {
+    this.arena.f64(this.at.nw, this.distinct).set(v.noWiggle);
+    this.arena.f64(this.at.w, this.distinct).set(v.wiggle);
   }
 }

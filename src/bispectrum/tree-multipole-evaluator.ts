@@ -38,9 +38,10 @@ import { CompiledMultipoleKernel } from './compiled-multipole-kernel.js';
  * the orientation averages are precomputed per node instead
  * (tree-angular-moments.ts, built on first use). Otherwise, without AP
  * distortion, B_l comes from the same loop compiled to WebAssembly
- * (compiled-multipole-kernel.ts, built on first use) unless the evaluator is
- * built with `compiledKernel` false or the kernel is unavailable; the
- * JavaScript loop below is its reference and fallback.
+ * (compiled-multipole-kernel.ts, built on first use), and so do the averaged
+ * templates, unless the evaluator is built with `compiledKernel` false or the
+ * kernel is unavailable; the JavaScript loops below are their reference and
+ * fallback.
  * Output layouts: B_l [multipole][bin] as combineTreeTemplates; templates
  * [bin][multipole][value] as the averagers.
  */
@@ -56,7 +57,7 @@ export class TreeMultipoleEvaluator {
   private readonly pairKernels: Float64Array;
   private readonly kLo: number;
   private readonly kHi: number;
-  /** Whether to use the WebAssembly B_l loop; the kernel itself, once built (null: unavailable). */
+  /** Whether to use the WebAssembly loops (B_l and templates); the kernel itself, once built (null: unavailable). */
   private readonly useCompiled: boolean;
   private compiled: CompiledMultipoleKernel | null | undefined;
 
@@ -154,7 +155,11 @@ export class TreeMultipoleEvaluator {
     const { aIR, cIR } = this.dampingCoefficients(s);
     const halfSv2 = 0.5 * s.velocityDispersion * s.velocityDispersion;
     const n1 = s.inverseDensity;
-    const { noWiggle: NW, wiggle: WG } = this.sidePowers.fill(s);
+    const powers = this.sidePowers.fill(s);
+    const inputs = { ...powers, aIR, cIR, halfSv2, inverseDensity: n1 };
+    const kernel = this.compiledKernel();
+    if (kernel && kernel.accepts(inputs)) return kernel.templates(inputs);
+    const { noWiggle: NW, wiggle: WG } = powers;
     const ix = this.sidePowers.index;
     const perMu = new Float64Array(T);
     const acc = new Float64Array(nm * T);
