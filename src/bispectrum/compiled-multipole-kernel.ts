@@ -2,6 +2,7 @@ import { EXP_TABLE, EXP_TABLE_LIMIT } from '../numerics/fast-exp.js';
 import type { OrientationGeometry } from './tree-multipole-distorted.js';
 import { TREE_MULTIPOLE_KERNEL_WASM } from './tree-multipole-kernel-wasm.js';
 import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
+import type { SharedGridSplines } from '../numerics/cubic-spline.js';
 import { compileEmbeddedWasm, WasmArena, type EmbeddedWasmModule } from '../numerics/embedded-wasm.js';
 
 /** What both loops need per evaluation: side powers and the damping coefficients. */
@@ -27,6 +28,19 @@ export interface MultipoleLoopInputs extends DampedSideInputs {
 /** Per-evaluation inputs of the template loop: the side powers, damping and 1/nbar. */
 export interface TemplateLoopInputs extends DampedSideInputs {
   readonly inverseDensity: number;
+}
+
+/** Inputs of the template loop with AP distortion (tree-multipole-distorted.ts). */
+export interface DistortedTemplateInputs {
+  readonly splines: ReturnType<SharedGridSplines['packed']>;
+  /** Damping coefficients a, c and Sigma^2 of exp(-q^2 Sigma^2 - t^2 (a + c nu^2)); all zero without IR resummation. */
+  readonly aIR: number;
+  readonly cIR: number;
+  readonly sigma2: number;
+  readonly halfSv2: number;
+  readonly inverseDensity: number;
+  readonly alphaPar: number;
+  readonly alphaPerp: number;
 }
 
 interface KernelExports {
@@ -64,6 +78,9 @@ export class CompiledMultipoleKernel {
     number
   >;
   private readonly distinct: number;
+  /** Where the AP loop's spline tables go, reserved on first use (grid points held). */
+  private gridSize = 0;
+  private gridAt: { x: number; values: number } | undefined;
 
   static create(geometry: OrientationGeometry, pairKernels: Float64Array, sideIndex: Int32Array, distinctLengths: number, kMax: number): CompiledMultipoleKernel | undefined {
     const module = compileEmbeddedWasm(TREE_MULTIPOLE_KERNEL_WASM);
@@ -109,7 +126,7 @@ export class CompiledMultipoleKernel {
       muWeights: put(muWeights),
       nw: arena.reserve(8 * distinctLengths),
       w: arena.reserve(8 * distinctLengths),
-      consts: arena.reserve(80),
+      consts: arena.reserve(8 * 14),
       acc: arena.reserve(8 * nm),
       out: arena.reserve(8 * nm * nodes.binCount),
       templateAcc: arena.reserve(16 * nm * TREE_TEMPLATE_SIZE),
@@ -136,12 +153,37 @@ export class CompiledMultipoleKernel {
 
   /** Averaged templates, layout [bin][multipole][value] (a new array). */
   templates(v: TemplateLoopInputs): Float64Array {
-    const { arena, at } = this;
     this.putSidePowers(v);
-    arena.f64(at.consts, 4).set([v.aIR, v.cIR, v.halfSv2, v.inverseDensity]);
+    return this.runTemplates([v.aIR, v.cIR, v.halfSv2, v.inverseDensity, 0, 1, 1, 1, 1, 0, 0, 0, 0, 0], 0, 0);
+  }
+
+  /** Whether the AP template loop keeps every exp argument in 0 <= x < 64 (true lengths up to kMax / min alpha). */
+  acceptsDistorted(v: DistortedTemplateInputs): boolean {
+    const q2 = this.kMax2 / Math.min(v.alphaPar, v.alphaPerp) ** 2;
+    return v.aIR >= 0 && v.cIR >= 0 && v.sigma2 >= 0 && (v.sigma2 + v.aIR + v.cIR) * q2 < EXP_TABLE_LIMIT && v.halfSv2 * 3 * q2 < EXP_TABLE_LIMIT;
+  }
+
+  /** Averaged templates with AP distortion, layout [bin][multipole][value] (a new array). */
+  distortedTemplates(v: DistortedTemplateInputs): Float64Array {
+    const { x, values, x0, invStep, step2over6, last } = v.splines;
+    if (x.length > this.gridSize) {
+      this.gridSize = x.length;
+      this.gridAt = { x: this.arena.reserve(8 * x.length), values: this.arena.reserve(32 * x.length) };
+    }
+    const g = this.gridAt as { x: number; values: number };
+    this.arena.f64(g.x, x.length).set(x);
+    this.arena.f64(g.values, values.length).set(values);
+    const vol = v.alphaPar * v.alphaPerp * v.alphaPerp;
+    const consts = [v.aIR, v.cIR, v.halfSv2, v.inverseDensity, 1, v.alphaPar, 1 / (v.alphaPar * v.alphaPar), 1 / (v.alphaPerp * v.alphaPerp), 1 / (vol * vol), v.sigma2, x0, invStep, step2over6, last];
+    return this.runTemplates(consts, g.x, g.values);
+  }
+
+  private runTemplates(consts: number[], grid: number, records: number): Float64Array {
+    const { arena, at } = this;
+    arena.f64(at.consts, consts.length).set(consts);
     arena.exports.templates(
       this.binCount, at.start, at.k1, at.k2, at.k3, at.cos12, at.sin12, at.weight, at.pairs, at.index, at.nw, at.w,
-      this.muPairs, this.phiCount, at.mu, at.los, at.muWeights, this.multipoleCount, at.consts, at.templateAcc, at.templateOut,
+      this.muPairs, this.phiCount, at.mu, at.los, at.muWeights, this.multipoleCount, at.consts, grid, records, at.templateAcc, at.templateOut,
     );
     return arena.f64(at.templateOut, this.multipoleCount * TREE_TEMPLATE_SIZE * this.binCount).slice();
   }

@@ -68,6 +68,11 @@ export class TabulatedSpectrum implements LinearSpectrum {
     return this.pair.sum(k, damping);
   }
 
+  /** The P_nw and P_w splines behind `dampedPower`, packed (SharedGridSplines.packed). */
+  packedSplines(): ReturnType<SharedGridSplines['packed']> {
+    return this.pair.packed();
+  }
+
   /** P_w = P - P_nw. */
   powerWiggle(k: number): number {
     return this.wiggle.at(k);

@@ -39,7 +39,7 @@ import { CompiledMultipoleKernel } from './compiled-multipole-kernel.js';
  * (tree-angular-moments.ts, built on first use). Otherwise, without AP
  * distortion, B_l comes from the same loop compiled to WebAssembly
  * (compiled-multipole-kernel.ts, built on first use), and so do the averaged
- * templates, unless the evaluator is built with `compiledKernel` false or the
+ * templates, with or without AP distortion (for a tabulated spectrum), unless the evaluator is built with `compiledKernel` false or the
  * kernel is unavailable; the JavaScript loops below are their reference and
  * fallback.
  * Output layouts: B_l [multipole][bin] as combineTreeTemplates; templates
@@ -125,7 +125,7 @@ export class TreeMultipoleEvaluator {
   /** Averaged templates [bin][multipole][value] (tree-template-terms.ts), as averaging TreeTemplateIntegrand. */
   templates(settings: TreeBispectrumSettings | ResolvedTreeSettings, tabulate = true): Float64Array {
     const s = this.prepare(settings, tabulate);
-    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return distortedTemplates(this.geometry, s);
+    if (s.alphaPar !== 1 || s.alphaPerp !== 1) return this.compiledDistortedTemplates(s) ?? distortedTemplates(this.geometry, s);
     if (isOrientationPolynomial(s)) return this.angularMoments().templates(s, this.sidePowers);
     return this.undistortedTemplates(s);
   }
@@ -301,6 +301,24 @@ export class TreeMultipoleEvaluator {
       for (let m = 0; m < nm; m++) out[m * binCount + bin] = acc[m];
     }
     return out;
+  }
+
+  /** The AP templates from the compiled loop, or null where it does not apply (spectrum not tabulated, exp range). */
+  private compiledDistortedTemplates(s: ResolvedTreeSettings): Float64Array | null {
+    const kernel = this.compiledKernel();
+    if (!kernel || !(s.spectrum instanceof TabulatedSpectrum)) return null;
+    const { aIR, cIR } = this.dampingCoefficients(s);
+    const inputs = {
+      splines: s.spectrum.packedSplines(),
+      aIR,
+      cIR,
+      sigma2: s.irResummation ? s.spectrum.sigma2BAO : 0,
+      halfSv2: 0.5 * s.velocityDispersion * s.velocityDispersion,
+      inverseDensity: s.inverseDensity,
+      alphaPar: s.alphaPar,
+      alphaPerp: s.alphaPerp,
+    };
+    return kernel.acceptsDistorted(inputs) ? kernel.distortedTemplates(inputs) : null;
   }
 
   private compiledKernel(): CompiledMultipoleKernel | null {

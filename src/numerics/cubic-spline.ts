@@ -182,6 +182,23 @@ export class SharedGridSplines {
     this.last = n - 2;
   }
 
+  /**
+   * The tables behind `sum`, for a compiled copy of it: the grid, per grid
+   * point the four numbers y1, y1'', y2, y2'' (interleaved), the grid start,
+   * 1 / step, step^2 / 6 and the last interval index.
+   */
+  packed(): { readonly x: Float64Array; readonly values: Float64Array; readonly x0: number; readonly invStep: number; readonly step2over6: number; readonly last: number } {
+    const n = this.x.length;
+    const values = new Float64Array(4 * n);
+    for (let i = 0; i < n; i++) {
+      values[4 * i] = this.y1[i];
+      values[4 * i + 1] = this.d1[i];
+      values[4 * i + 2] = this.y2[i];
+      values[4 * i + 3] = this.d2[i];
+    }
+    return { x: this.x, values, x0: this.x0, invStep: this.invStep, step2over6: this.step2over6, last: this.last };
+  }
+
   /** s1(t) + c s2(t). */
   sum(t: number, c: number): number {
     let i = Math.floor((t - this.x0) * this.invStep);

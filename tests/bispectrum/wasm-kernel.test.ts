@@ -34,6 +34,21 @@ function maxScaledDifference(a: Float64Array, b: Float64Array, binCount: number)
   return e;
 }
 
+/** Largest |a - b| over templates [bin][multipole][term], in units of the largest |b| of the same bin and term. */
+function maxTemplateDifference(a: Float64Array, b: Float64Array, nm: number): number {
+  const T = TREE_TEMPLATE_SIZE;
+  const binCount = b.length / (nm * T);
+  let worst = 0;
+  for (let bin = 0; bin < binCount; bin++) {
+    for (let t = 0; t < T; t++) {
+      let scale = 0;
+      for (let m = 0; m < nm; m++) scale = Math.max(scale, Math.abs(b[(bin * nm + m) * T + t]));
+      for (let m = 0; m < nm; m++) worst = Math.max(worst, Math.abs(a[(bin * nm + m) * T + t] - b[(bin * nm + m) * T + t]) / scale);
+    }
+  }
+  return worst;
+}
+
 /** The generic average, [bin][multipole], as [multipole][bin]. */
 function genericMultipoles(settings: Record<string, unknown>, multipoles: number[], rule: ReturnType<typeof orientationRule>): Float64Array {
   const g = averageOverTriangleNodes(nodes, new TreeDirectIntegrand(settings as never, params), multipoles, rule);
@@ -80,18 +95,29 @@ describe('compiled B_l and template loops (WebAssembly SIMD)', () => {
       const js = new TreeMultipoleEvaluator(nodes, c.multipoles, rule, { compiledKernel: false }).templates(settings, false);
       expect(compiled.length).toBe(js.length);
       const nm = c.multipoles.length;
-      const T = TREE_TEMPLATE_SIZE;
-      let worst = 0;
-      for (let bin = 0; bin < nodes.binCount; bin++) {
-        for (let t = 0; t < T; t++) {
-          let scale = 0;
-          for (let m = 0; m < nm; m++) scale = Math.max(scale, Math.abs(js[(bin * nm + m) * T + t]));
-          for (let m = 0; m < nm; m++) worst = Math.max(worst, Math.abs(compiled[(bin * nm + m) * T + t] - js[(bin * nm + m) * T + t]) / scale);
-        }
-      }
-      expect(worst).toBeLessThan(1e-13);
+      expect(maxTemplateDifference(compiled, js, nm)).toBeLessThan(1e-13);
       // Combined, the compiled templates give the compiled direct B_l (issue #3: template = direct to 1e-10).
       const direct = new TreeMultipoleEvaluator(nodes, c.multipoles, rule).evaluate(settings, params, false);
+      expect(maxScaledDifference(combineTreeTemplates(compiled, nm, params), direct, nodes.binCount)).toBeLessThan(1e-12);
+    });
+  }
+
+  const apCases: { name: string; rule: [number, number]; multipoles: number[]; extra: Record<string, number | boolean> }[] = [
+    { name: 'IR resummation, alpha_par 1.03, alpha_perp 0.97', rule: [4, 6], multipoles: [0, 2], extra: { alphaPar: 1.03, alphaPerp: 0.97 } },
+    { name: 'IR and fingers-of-god damping, odd mu count, four multipoles', rule: [5, 7], multipoles: [0, 2, 4, 6], extra: { alphaPar: 0.96, alphaPerp: 1.02, velocityDispersion: 4 } },
+    { name: 'no IR resummation, one mu node', rule: [1, 3], multipoles: [2], extra: { alphaPar: 1.01, alphaPerp: 1.04, irResummation: false } },
+  ];
+  for (const c of apCases) {
+    it(`its AP template loop equals the JavaScript AP loop to 1e-13 per bin and term (${c.name})`, () => {
+      const rule = orientationRule(...c.rule);
+      const settings = { spectrum, numberDensity: 2e-4, ...c.extra };
+      const compiled = new TreeMultipoleEvaluator(nodes, c.multipoles, rule).templates(settings);
+      const js = new TreeMultipoleEvaluator(nodes, c.multipoles, rule, { compiledKernel: false }).templates(settings);
+      const nm = c.multipoles.length;
+      expect(compiled.length).toBe(js.length);
+      expect(maxTemplateDifference(compiled, js, nm)).toBeLessThan(1e-13);
+      // Combined, they give the direct AP loop's B_l.
+      const direct = new TreeMultipoleEvaluator(nodes, c.multipoles, rule).evaluate(settings, params);
       expect(maxScaledDifference(combineTreeTemplates(compiled, nm, params), direct, nodes.binCount)).toBeLessThan(1e-12);
     });
   }
