@@ -55,16 +55,19 @@ export function compiledKernelAvailable(): boolean {
 }
 
 /**
- * The B_l and template orientation loops of TreeMultipoleEvaluator without AP
- * distortion, compiled to WebAssembly with SIMD (wasm/tree-multipole-kernel.ts
- * and wasm/tree-template-loop.ts, built into tree-multipole-kernel-wasm.ts by
- * `npm run build:wasm`): the same terms, two mu nodes per f64x2 vector (and for
- * B_l the phi sum in two chains), so rounding differs; faster than the
- * JavaScript loops on one core (bench/bispectrum.bench.ts). Each instance owns a WebAssembly memory
- * holding the geometry, copied once; per evaluation only the side powers and
- * ten constants go in. `create` returns undefined where WebAssembly SIMD is
- * not available; `accepts` tells whether an evaluation keeps the kernel's exp
- * argument in its table range (0 <= x < 64); otherwise the JavaScript loop runs.
+ * Orientation loops of TreeMultipoleEvaluator compiled to WebAssembly with
+ * SIMD (wasm/tree-multipole-kernel.ts and wasm/tree-template-loop.ts, built
+ * into tree-multipole-kernel-wasm.ts by `npm run build:wasm`): B_l without AP
+ * distortion, and the averaged templates without and with AP distortion
+ * (tree-multipole-distorted.ts). The same terms, two mu nodes per f64x2 vector
+ * (and for B_l the phi sum in two chains), so rounding differs; faster than the
+ * JavaScript loops on one core (bench/bispectrum.bench.ts). Each instance owns
+ * a WebAssembly memory holding the geometry, copied once; per evaluation only
+ * the side powers (or, with AP, the spline tables of the tabulated spectrum)
+ * and a few constants go in. `create` returns undefined where WebAssembly SIMD
+ * is not available; `accepts` and `acceptsDistorted` tell whether an
+ * evaluation keeps the kernel's exp arguments in its table range
+ * (0 <= x < 64); otherwise the JavaScript loop runs.
  */
 export class CompiledMultipoleKernel {
   private readonly arena: WasmArena<KernelExports>;

@@ -17,7 +17,9 @@ import { directLoopConstants } from './tree-loop-constants.js';
  * so with u = k mu the three true t_i still sum to zero and
  *   q^2 Sigma_tot^2(nu) = q^2 Sigma^2 + t^2 (a + c nu^2),  nu^2 = t^2 / q^2,
  * the cosines between true sides follow from the true lengths, and side 1's
- * true quantities change only with the mu node.
+ * true quantities change only with the mu node. `distortedTemplates` has a
+ * compiled twin (wasm/tree-template-loop.ts) that runs by default; change both
+ * together (DEVELOPERS.md).
  */
 export interface OrientationGeometry {
   readonly nodes: TriangleNodeSet;

@@ -39,9 +39,10 @@ import { CompiledMultipoleKernel } from './compiled-multipole-kernel.js';
  * (tree-angular-moments.ts, built on first use). Otherwise, without AP
  * distortion, B_l comes from the same loop compiled to WebAssembly
  * (compiled-multipole-kernel.ts, built on first use), and so do the averaged
- * templates, with or without AP distortion (for a tabulated spectrum), unless the evaluator is built with `compiledKernel` false or the
- * kernel is unavailable; the JavaScript loops below are their reference and
- * fallback.
+ * templates, with or without AP distortion (for a tabulated spectrum), unless
+ * the evaluator is built with `compiledKernel` false or the kernel is
+ * unavailable; the JavaScript loops here and in tree-multipole-distorted.ts
+ * are their reference and fallback.
  * Output layouts: B_l [multipole][bin] as combineTreeTemplates; templates
  * [bin][multipole][value] as the averagers.
  */
