@@ -86,7 +86,7 @@ export function demoRunConfig(): Record<string, unknown> {
       bispShotPower: marg(1, 2),
       bispShotConst: marg(1, 2),
     },
-    sampler: { method: 'ensemble', seed: 7, walkers: 24, maxSteps: 1000, checkEvery: 100, tauMultiple: 15, tauDrift: 0.05 },
+    sampler: { method: 'ensemble', seed: 7, walkers: 24, maxSteps: 4000, checkEvery: 100, tauMultiple: 40, tauDrift: 0.02 },
     peak: { starts: 0 },
     output: '../treble-demo-run',
     truth: 'truth.json',
