@@ -5,13 +5,17 @@ import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
 import type { SharedGridSplines } from '../numerics/cubic-spline.js';
 import { compileEmbeddedWasm, WasmArena, type EmbeddedWasmModule } from '../numerics/embedded-wasm.js';
 
-/** What both loops need per evaluation: side powers and the damping coefficients. */
-export interface DampedSideInputs {
-  readonly noWiggle: Float64Array;
-  readonly wiggle: Float64Array;
+/** The damping of every loop: a and c of the mu-dependent BAO damping exp(-u^2 [a + c mu^2]), sigma_v^2 / 2. */
+export interface LoopDamping {
   readonly aIR: number;
   readonly cIR: number;
   readonly halfSv2: number;
+}
+
+/** What the loops without AP need per evaluation: side powers (P_nw, damped-at-mu=0 wiggle) and the damping. */
+export interface DampedSideInputs extends LoopDamping {
+  readonly noWiggle: Float64Array;
+  readonly wiggle: Float64Array;
 }
 
 /** Per-evaluation inputs of the B_l loop, as TreeMultipoleEvaluator prepares them. */
@@ -30,17 +34,18 @@ export interface TemplateLoopInputs extends DampedSideInputs {
   readonly inverseDensity: number;
 }
 
-/** Inputs of the template loop with AP distortion (tree-multipole-distorted.ts). */
-export interface DistortedTemplateInputs {
+/**
+ * Inputs of the template loop with AP distortion (tree-multipole-distorted.ts):
+ * the spline tables of the tabulated spectrum, the damping exp(-q^2 Sigma^2 -
+ * t^2 (a + c nu^2)) (a, c and Sigma^2 all zero without IR resummation), 1/nbar,
+ * alpha_par and the dilation of tree-multipole-distorted.ts (`dilation`).
+ */
+export interface DistortedTemplateInputs extends LoopDamping {
   readonly splines: ReturnType<SharedGridSplines['packed']>;
-  /** Damping coefficients a, c and Sigma^2 of exp(-q^2 Sigma^2 - t^2 (a + c nu^2)); all zero without IR resummation. */
-  readonly aIR: number;
-  readonly cIR: number;
   readonly sigma2: number;
-  readonly halfSv2: number;
   readonly inverseDensity: number;
   readonly alphaPar: number;
-  readonly alphaPerp: number;
+  readonly dilation: { readonly ip2: number; readonly iq2: number; readonly amp: number };
 }
 
 interface KernelExports {
@@ -138,8 +143,8 @@ export class CompiledMultipoleKernel {
   }
 
   /** Whether every exp argument of this evaluation stays in 0 <= x < 64 (u^2 <= k^2, mu^2 <= 1). */
-  accepts(v: DampedSideInputs): boolean {
-    return v.aIR >= 0 && v.cIR >= 0 && (v.aIR + v.cIR) * this.kMax2 < EXP_TABLE_LIMIT && v.halfSv2 * 3 * this.kMax2 < EXP_TABLE_LIMIT;
+  accepts(v: LoopDamping): boolean {
+    return this.inTableRange(v, 0, this.kMax2);
   }
 
   /** B_l, layout [multipole][bin] (a new array). */
@@ -157,13 +162,18 @@ export class CompiledMultipoleKernel {
   /** Averaged templates, layout [bin][multipole][value] (a new array). */
   templates(v: TemplateLoopInputs): Float64Array {
     this.putSidePowers(v);
+    // AP switch off; the AP slots (alpha_par, 1/alpha_par^2, 1/alpha_perp^2, amplitude, Sigma^2, spline) unused.
     return this.runTemplates([v.aIR, v.cIR, v.halfSv2, v.inverseDensity, 0, 1, 1, 1, 1, 0, 0, 0, 0, 0], 0, 0);
   }
 
   /** Whether the AP template loop keeps every exp argument in 0 <= x < 64 (true lengths up to kMax / min alpha). */
   acceptsDistorted(v: DistortedTemplateInputs): boolean {
-    const q2 = this.kMax2 / Math.min(v.alphaPar, v.alphaPerp) ** 2;
-    return v.aIR >= 0 && v.cIR >= 0 && v.sigma2 >= 0 && (v.sigma2 + v.aIR + v.cIR) * q2 < EXP_TABLE_LIMIT && v.halfSv2 * 3 * q2 < EXP_TABLE_LIMIT;
+    return this.inTableRange(v, v.sigma2, this.kMax2 * Math.max(v.dilation.ip2, v.dilation.iq2));
+  }
+
+  /** exp(-q^2 Sigma^2 - t^2 (a + c nu^2)) and the fingers-of-god exp in the table for q^2 <= q2Max (t^2 <= q^2, nu^2 <= 1). */
+  private inTableRange(v: LoopDamping, sigma2: number, q2Max: number): boolean {
+    return v.aIR >= 0 && v.cIR >= 0 && sigma2 >= 0 && (sigma2 + v.aIR + v.cIR) * q2Max < EXP_TABLE_LIMIT && v.halfSv2 * 3 * q2Max < EXP_TABLE_LIMIT;
   }
 
   /** Averaged templates with AP distortion, layout [bin][multipole][value] (a new array). */
@@ -176,8 +186,8 @@ export class CompiledMultipoleKernel {
     const g = this.gridAt as { x: number; values: number };
     this.arena.f64(g.x, x.length).set(x);
     this.arena.f64(g.values, values.length).set(values);
-    const vol = v.alphaPar * v.alphaPerp * v.alphaPerp;
-    const consts = [v.aIR, v.cIR, v.halfSv2, v.inverseDensity, 1, v.alphaPar, 1 / (v.alphaPar * v.alphaPar), 1 / (v.alphaPerp * v.alphaPerp), 1 / (vol * vol), v.sigma2, x0, invStep, step2over6, last];
+    const { ip2, iq2, amp } = v.dilation;
+    const consts = [v.aIR, v.cIR, v.halfSv2, v.inverseDensity, 1, v.alphaPar, ip2, iq2, amp, v.sigma2, x0, invStep, step2over6, last];
     return this.runTemplates(consts, g.x, g.values);
   }
 

@@ -58,7 +58,7 @@ function sidePowerOf(s: ResolvedTreeSettings): SidePower {
 }
 
 /** 1/apar^2, 1/aperp^2 and the amplitude 1/(apar aperp^2)^2. */
-function dilation(s: ResolvedTreeSettings): { ip2: number; iq2: number; amp: number } {
+export function dilation(s: ResolvedTreeSettings): { ip2: number; iq2: number; amp: number } {
   const vol = s.alphaPar * s.alphaPerp * s.alphaPerp;
   return { ip2: 1 / (s.alphaPar * s.alphaPar), iq2: 1 / (s.alphaPerp * s.alphaPerp), amp: 1 / (vol * vol) };
 }

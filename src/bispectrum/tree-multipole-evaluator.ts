@@ -5,7 +5,7 @@ import { NodeSidePowers } from './node-side-powers.js';
 import { TabulatedSpectrum } from './tabulated-spectrum.js';
 import type { TriangleNodeSet } from './triangle-node-set.js';
 import type { TreeBispectrumParameters } from './tree-template-terms.js';
-import { distortedMultipoles, distortedTemplates, type OrientationGeometry } from './tree-multipole-distorted.js';
+import { dilation, distortedMultipoles, distortedTemplates, type OrientationGeometry } from './tree-multipole-distorted.js';
 import { addPairTemplates } from './tree-template-integrand.js';
 import { TREE_TEMPLATE_SIZE } from './tree-template-terms.js';
 import { checkWavenumbersInTable, isOrientationPolynomial, resolveTreeSettings, type ResolvedTreeSettings, type TreeBispectrumSettings } from './tree-settings.js';
@@ -317,7 +317,7 @@ export class TreeMultipoleEvaluator {
       halfSv2: 0.5 * s.velocityDispersion * s.velocityDispersion,
       inverseDensity: s.inverseDensity,
       alphaPar: s.alphaPar,
-      alphaPerp: s.alphaPerp,
+      dilation: dilation(s),
     };
     return kernel.acceptsDistorted(inputs) ? kernel.distortedTemplates(inputs) : null;
   }
